@@ -1,0 +1,54 @@
+import knexFactory, { type Knex } from 'knex';
+import { knexConfig } from './config';
+
+export async function isSeeded(db: Knex): Promise<boolean> {
+  const row = await db('shop').count<{ count: number }[]>({ count: '*' }).first();
+  return Number(row?.count ?? 0) > 0;
+}
+
+/** Creates the database named in the URL when it does not exist yet (connecting to `postgres`). */
+export async function ensureDatabaseExists(connectionString: string): Promise<void> {
+  const url = new URL(connectionString);
+  const name = decodeURIComponent(url.pathname.replace(/^\//, ''));
+  if (!name) throw new Error('DATABASE_URL names no database.');
+  url.pathname = '/postgres';
+  const admin = knexFactory(knexConfig(url.toString(), { min: 0, max: 1 }));
+  try {
+    const found = await admin.raw('select 1 from pg_database where datname = ?', [name]);
+    if (found.rows.length === 0) {
+      await admin.raw('create database ??', [name]);
+    }
+  } finally {
+    await admin.destroy();
+  }
+}
+
+export interface SetupResult {
+  migrations: string[];
+  seeded: boolean;
+}
+
+/** Runs pending migrations, then loads the demo shop if the database has no shop yet. */
+export async function setupDatabase(
+  connectionString: string,
+  options: { seed: boolean; log?: (line: string) => void },
+): Promise<SetupResult> {
+  const log = options.log ?? (() => {});
+  await ensureDatabaseExists(connectionString);
+  const db = knexFactory(knexConfig(connectionString, { min: 0, max: 2 }));
+  try {
+    const [, applied] = (await db.migrate.latest()) as [number, string[]];
+    log(applied.length ? `applied ${applied.length} migration(s)` : 'schema is up to date');
+    let seeded = false;
+    if (options.seed && !(await isSeeded(db))) {
+      log('loading the demo shop');
+      await db.seed.run();
+      seeded = true;
+    } else if (options.seed) {
+      log('demo shop already loaded; keeping its data');
+    }
+    return { migrations: applied, seeded };
+  } finally {
+    await db.destroy();
+  }
+}
