@@ -1,0 +1,19 @@
+import type { ComponentProps, ReactNode } from 'react';
+import { cn } from './cn';
+import { FieldShell, controlClasses, describedBy, useFieldIds } from './field';
+
+type TextFieldProps = ComponentProps<'input'> & {
+  label: ReactNode;
+  hint?: ReactNode;
+  error?: string | undefined;
+  containerClassName?: string;
+};
+
+export function TextField({ label, hint, error, id, className, containerClassName, ...props }: TextFieldProps) {
+  const ids = useFieldIds(id);
+  return (
+    <FieldShell ids={ids} label={label} hint={hint} error={error} className={containerClassName}>
+      <input id={ids.control} className={cn(controlClasses, className)} {...describedBy(ids, hint, error)} {...props} />
+    </FieldShell>
+  );
+}

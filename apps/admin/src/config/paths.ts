@@ -1,0 +1,44 @@
+function withQuery(path: string, params: Record<string, string | undefined>): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) if (value) search.set(key, value);
+  const text = search.toString();
+  return text ? `${path}?${text}` : path;
+}
+
+export const paths = {
+  home: { path: '/', getHref: () => '/' },
+  signIn: { path: '/sign-in', getHref: (next?: string) => withQuery('/sign-in', { next }) },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  resetPassword: { path: '/reset-password', getHref: (token?: string) => withQuery('/reset-password', { token }) },
+  acceptInvitation: {
+    path: '/accept-invitation',
+    getHref: (token?: string) => withQuery('/accept-invitation', { token }),
+  },
+  profile: { path: '/profile', getHref: () => '/profile' },
+  people: { path: '/people', getHref: () => '/people' },
+  outbox: { path: '/outbox', getHref: () => '/outbox' },
+} as const;
+
+const publicPaths: readonly string[] = [
+  paths.signIn.path,
+  paths.forgotPassword.path,
+  paths.resetPassword.path,
+  paths.acceptInvitation.path,
+];
+
+/**
+ * Where to go after signing in. `next` arrives in the URL, so anyone can write it: only paths
+ * on this origin are followed, never another site, and never back to a signed-out page.
+ */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/')) return paths.home.path;
+  const base = 'http://chuckkey.invalid';
+  let url: URL;
+  try {
+    url = new URL(next, base);
+  } catch {
+    return paths.home.path;
+  }
+  if (url.origin !== base || publicPaths.includes(url.pathname)) return paths.home.path;
+  return `${url.pathname}${url.search}${url.hash}`;
+}

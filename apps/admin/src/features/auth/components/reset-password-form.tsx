@@ -1,0 +1,86 @@
+import { PASSWORD_MIN, passwordResetConfirmSchema } from '@chuckkey/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button, ButtonLink } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/text-field';
+import { TextLink } from '../../../components/ui/text-link';
+import { paths } from '../../../config/paths';
+import { ApiError } from '../../../lib/api-client';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
+import { useConfirmPasswordReset } from '../api/confirm-password-reset';
+
+const formSchema = passwordResetConfirmSchema
+  .pick({ password: true })
+  .extend({ confirmPassword: confirmPasswordSchema })
+  .refine((values) => values.password === values.confirmPassword, {
+    path: ['confirmPassword'],
+    error: passwordsDifferMessage,
+  });
+
+export function ResetPasswordForm({ token }: { token: string }) {
+  const confirmReset = useConfirmPasswordReset();
+  const [formError, setFormError] = useState<string | null>(null);
+  const [linkExpired, setLinkExpired] = useState(false);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(formSchema), defaultValues: { password: '', confirmPassword: '' } });
+
+  const onSubmit = handleSubmit(async ({ password }) => {
+    setFormError(null);
+    try {
+      await confirmReset.mutateAsync({ token, password });
+    } catch (error) {
+      if (error instanceof ApiError && error.code === 'invalid_token') {
+        setLinkExpired(true);
+        return;
+      }
+      setFormError(applyServerErrors(error, setError, ['password']));
+    }
+  });
+
+  if (confirmReset.isSuccess) {
+    return (
+      <Alert tone="success" title="Your new password is set" action={<ButtonLink to={paths.signIn.getHref()} variant="primary">Sign in</ButtonLink>}>
+        Sign in with your e-mail and the new password.
+      </Alert>
+    );
+  }
+
+  if (linkExpired) {
+    return (
+      <Alert tone="error" title="This link no longer works">
+        It has expired or was already used. <TextLink to={paths.forgotPassword.getHref()}>Ask for a new link</TextLink>.
+      </Alert>
+    );
+  }
+
+  return (
+    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
+      {formError && <Alert tone="error">{formError}</Alert>}
+      <TextField
+        label="New password"
+        hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
+        type="password"
+        autoComplete="new-password"
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <TextField
+        label="Confirm new password"
+        type="password"
+        autoComplete="new-password"
+        error={errors.confirmPassword?.message}
+        {...register('confirmPassword')}
+      />
+      <Button type="submit" pending={confirmReset.isPending} className="w-full">
+        Set new password
+      </Button>
+    </form>
+  );
+}

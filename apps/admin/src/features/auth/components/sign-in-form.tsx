@@ -1,0 +1,62 @@
+import { loginSchema, type User } from '@chuckkey/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/text-field';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useSignIn } from '../api/sign-in';
+
+const messages = {
+  invalid_credentials: "That e-mail and password don't match an account here. Check both and try again.",
+  too_many_attempts: 'Too many tries in a short time. Wait a few minutes, then try again.',
+};
+
+export function SignInForm({ onSignedIn }: { onSignedIn: (user: User) => void }) {
+  const signIn = useSignIn();
+  const [formError, setFormError] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    resetField,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '' } });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      onSignedIn(await signIn.mutateAsync(values));
+    } catch (error) {
+      resetField('password');
+      setFormError(applyServerErrors(error, setError, ['email', 'password'], { messages }));
+    }
+  });
+
+  return (
+    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
+      {formError && <Alert tone="error">{formError}</Alert>}
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        inputMode="email"
+        autoCapitalize="none"
+        spellCheck={false}
+        error={errors.email?.message}
+        {...register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <Button type="submit" pending={signIn.isPending} className="w-full">
+        Sign in
+      </Button>
+    </form>
+  );
+}

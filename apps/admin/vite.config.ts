@@ -1,0 +1,27 @@
+/// <reference types="vitest/config" />
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+import { defineConfig } from 'vite';
+
+// The API and the socket live on the server's origin; in development the proxy keeps the
+// browser on one origin so that session cookies and the CSRF token behave as in production.
+const serverOrigin = 'http://127.0.0.1:3000';
+
+export default defineConfig({
+  base: '/',
+  plugins: [react(), tailwindcss()],
+  server: {
+    proxy: {
+      '/api': { target: serverOrigin, changeOrigin: false },
+      '/socket.io': { target: serverOrigin, ws: true, changeOrigin: false },
+    },
+  },
+  build: {
+    outDir: 'dist',
+    emptyOutDir: true,
+  },
+  test: {
+    environment: 'node',
+    include: ['src/**/*.test.ts'],
+  },
+});

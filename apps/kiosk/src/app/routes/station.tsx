@@ -1,0 +1,30 @@
+import { useShop } from '@/features/shop/api/get-shop';
+import { SafetyLine } from '@/features/station/components/safety-line';
+import { StationAwaitingPairing } from '@/features/station/components/station-awaiting-pairing';
+
+export function Component() {
+  const shop = useShop();
+
+  return (
+    <div className="flex min-h-full flex-col">
+      <title>Station · Chuckkey</title>
+      <header className="bg-brand px-8 py-4 text-white">
+        <p className="text-kiosk-body font-bold tracking-[0.12em] uppercase">Station</p>
+      </header>
+      <main className="flex flex-1 flex-col items-center justify-center gap-8 px-8 py-12">
+        {shop.data ? (
+          <StationAwaitingPairing shopName={shop.data.name} />
+        ) : shop.isError ? (
+          <p role="alert" className="text-kiosk-lead text-balance text-center">
+            The shop’s server does not answer yet. This screen keeps trying.
+          </p>
+        ) : (
+          <p className="text-kiosk-lead text-ink-muted">Loading…</p>
+        )}
+      </main>
+      <footer className="flex justify-center px-8 pb-8">
+        <SafetyLine />
+      </footer>
+    </div>
+  );
+}

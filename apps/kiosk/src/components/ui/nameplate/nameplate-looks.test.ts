@@ -1,0 +1,25 @@
+import { describe, expect, it } from 'vitest';
+import { nameplateLook, nameplateStates } from './nameplate-looks';
+
+describe('nameplate looks', () => {
+  it('names every state in the words of the shop floor', () => {
+    expect(nameplateStates.map((state) => nameplateLook(state).label)).toEqual([
+      'Available',
+      'In use',
+      'Reserved next',
+      'Tagged out',
+      'Offline',
+    ]);
+  });
+
+  it('gives every state its own icon so that no state is told apart by colour alone', () => {
+    const icons = nameplateStates.map((state) => nameplateLook(state).icon);
+    expect(new Set(icons).size).toBe(nameplateStates.length);
+  });
+
+  it('stripes a tagged-out plate and leaves an offline plate as a grey outline', () => {
+    expect(nameplateLook('tagged_out').plate).toContain('stripes-tagged-out');
+    expect(nameplateLook('offline').plate).toContain('bg-transparent');
+    expect(nameplateLook('offline').plate).toContain('border-state-offline');
+  });
+});

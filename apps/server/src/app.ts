@@ -1,0 +1,72 @@
+import { randomUUID } from 'node:crypto';
+import express from 'express';
+import helmet from 'helmet';
+import { Passport } from 'passport';
+import { pinoHttp } from 'pino-http';
+import type { Deps } from './lib/deps';
+import { apiNotFound, problemHandler } from './lib/problem';
+import { csrfProtection } from './middleware/csrf';
+import { createSessionMiddleware } from './middleware/session';
+import { authRoutes } from './modules/auth/auth.routes';
+import { healthRoutes } from './modules/health/health.routes';
+import { invitationsRoutes } from './modules/invitations/invitations.routes';
+import { membersRoutes } from './modules/members/members.routes';
+import { outboxRoutes } from './modules/outbox/outbox.routes';
+import { profileRoutes } from './modules/profile/profile.routes';
+import { shopRoutes } from './modules/shop/shop.routes';
+import { staticApps } from './static-apps';
+
+const REQUEST_ID = /^[A-Za-z0-9._-]{1,100}$/;
+
+export function createApp(deps: Deps) {
+  const { config, logger } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const given = req.headers['x-request-id'];
+        const id = typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
+        res.setHeader('x-request-id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+    }),
+  );
+  // Kiosks on the shop's network may reach the server over plain HTTP: upgrading their requests
+  // to HTTPS, or pinning HTTPS, would break them unless the shop serves TLS.
+  const tls = config.COOKIE_SECURE === 'true';
+  app.use(
+    helmet({
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: tls ? [] : null } },
+      strictTransportSecurity: tls,
+    }),
+  );
+
+  const sessions = createSessionMiddleware(config, logger);
+  const passport = new Passport();
+
+  const api = express.Router();
+  api.use(express.json({ limit: '100kb' }));
+  api.use('/health', healthRoutes(deps));
+  api.use(sessions.middleware);
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(csrfProtection);
+  api.use('/auth', authRoutes(deps, passport));
+  api.use('/profile', profileRoutes(deps));
+  api.use('/members', membersRoutes(deps));
+  api.use('/invitations', invitationsRoutes(deps));
+  api.use('/outbox', outboxRoutes(deps));
+  api.use(shopRoutes(deps));
+  api.use(apiNotFound);
+  api.use(problemHandler);
+
+  app.use('/api', api);
+  if (config.SERVE_APPS) app.use(staticApps(config));
+
+  return { app, close: sessions.close };
+}

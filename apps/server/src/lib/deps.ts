@@ -1,0 +1,13 @@
+import type { Db } from './db';
+import type { Config } from '../config';
+import type { Logger } from './logger';
+import type { Mailer } from './mailer';
+
+/** What every module's routes and services are built from. */
+export interface Deps {
+  config: Config;
+  db: Db;
+  logger: Logger;
+  mailer: Mailer;
+}
+

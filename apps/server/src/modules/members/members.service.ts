@@ -1,0 +1,40 @@
+import type { Member, MemberListQuery, MemberPage, MemberUpdate } from '@chuckkey/core';
+import { toCsv } from '@chuckkey/core';
+import { conflict, notFound } from '../../lib/errors';
+import type { Deps } from '../../lib/deps';
+import { membersRepository, toMember } from './members.repository';
+
+const CSV_EXPORT_LIMIT = 100_000;
+
+export function membersService({ db }: Deps) {
+  const members = membersRepository(db);
+  return {
+    async list(query: MemberListQuery): Promise<MemberPage> {
+      const { items, total } = await members.list(query);
+      return { items: items.map(toMember), total, page: query.page, pageSize: query.pageSize };
+    },
+
+    async exportCsv(query: MemberListQuery): Promise<string> {
+      const { items } = await members.list({ ...query, page: 1, pageSize: CSV_EXPORT_LIMIT });
+      return toCsv(items.map(toMember), [
+        { header: 'First name', value: (m: Member) => m.firstName },
+        { header: 'Last name', value: (m) => m.lastName },
+        { header: 'E-mail', value: (m) => m.email },
+        { header: 'Role', value: (m) => m.role },
+        { header: 'Active', value: (m) => (m.active ? 'yes' : 'no') },
+        { header: 'Joined', value: (m) => m.createdAt },
+      ]);
+    },
+
+    async update(actor: Express.User, id: string, changes: MemberUpdate): Promise<Member> {
+      // An admin who demotes or deactivates themself could leave the shop with no admin.
+      if (actor.id === id && ((changes.role && changes.role !== actor.role) || changes.active === false)) {
+        throw conflict('cannot_change_self', 'You cannot change your own role or deactivate yourself. Ask another admin.');
+      }
+      const updated = await members.update(id, changes);
+      if (!updated) throw notFound('member_not_found', 'There is no member with that id.');
+      if (changes.active === false) await members.endWebSessions(id);
+      return toMember(updated);
+    },
+  };
+}
