@@ -12,7 +12,7 @@ const env = z
   .parse(process.env);
 
 const logger = createLogger(env.LOG_LEVEL);
-const db = createDb(env.DATABASE_URL);
+const db = createDb(env.DATABASE_URL, logger, 2);
 const catcher = await startMailCatcher({ db, logger, port: env.MAIL_CATCHER_PORT });
 logger.info({ url: catcher.url }, 'mail catcher listening');
 

@@ -17,7 +17,7 @@ async function main(): Promise<void> {
     throw error;
   }
   const logger = createLogger(config.LOG_LEVEL);
-  const db = createDb(config.DATABASE_URL);
+  const db = createDb(config.DATABASE_URL, logger);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
   const { app, close } = createApp({ config, db, logger, mailer });
   const http = await listen(app, config.PORT, config.HOST);

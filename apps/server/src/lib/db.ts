@@ -1,10 +1,21 @@
 import knexFactory, { type Knex } from 'knex';
 import { knexConfig } from '@chuckkey/db';
+import type { Logger } from './logger';
 
 export type Db = Knex;
 
-export function createDb(databaseUrl: string): Db {
-  return knexFactory(knexConfig(databaseUrl, { min: 0, max: 10 }));
+
+/** Knex on PostgreSQL, its own warnings sent to the structured log instead of the console. */
+export function createDb(databaseUrl: string, logger: Logger, max = 10): Db {
+  return knexFactory({
+    ...knexConfig(databaseUrl, { min: 0, max }),
+    log: {
+      warn: (message: unknown) => logger.warn({ detail: String(message) }, 'database warning'),
+      error: (message: unknown) => logger.error({ detail: String(message) }, 'database error'),
+      deprecate: (method: string, alternative: string) => logger.warn({ method, alternative }, 'knex deprecation'),
+      debug: (message: unknown) => logger.debug({ detail: String(message) }, 'database debug'),
+    },
+  });
 }
 
 /** True when PostgreSQL answers within the time limit. */
