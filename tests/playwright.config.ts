@@ -11,8 +11,8 @@ function passThroughEnv(): Record<string, string> {
 
 export default defineConfig({
   testDir: './e2e',
-  // Tests share one server and one database; two workers is the most the server's sign-in
-  // throttle and the shared outbox stay predictable with.
+  // Every worker shares one server and one database; CI runs one at a time so a failure's
+  // server log reads in order.
   workers: process.env.CI ? 1 : 2,
   fullyParallel: false,
   retries: 0,
@@ -47,8 +47,6 @@ export default defineConfig({
     url: `${baseURL}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,
-    stdout: 'pipe',
-    stderr: 'pipe',
     env: { ...passThroughEnv(), PORT: port },
   },
 });

@@ -17,10 +17,15 @@ export async function listen(handler: RequestListener, port: number, host: strin
   let closing: Promise<void> | undefined;
   function shutdown(graceMs = 10_000): Promise<void> {
     closing ??= new Promise<void>((resolve) => {
-      server.close(() => resolve());
-      server.closeIdleConnections();
+      // Keep-alive connections turn idle as their last response goes out: close them as they do.
+      const sweep = setInterval(() => server.closeIdleConnections(), 100);
       const force = setTimeout(() => server.closeAllConnections(), graceMs);
-      force.unref();
+      server.close(() => {
+        clearInterval(sweep);
+        clearTimeout(force);
+        resolve();
+      });
+      server.closeIdleConnections();
     });
     return closing;
   }

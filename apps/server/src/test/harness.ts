@@ -15,7 +15,7 @@ export function testConfig(overrides: Record<string, string> = {}): Config {
     DATABASE_URL: inject('databaseUrl'),
     SMTP_URL: inject('smtpUrl'),
     SESSION_SECRET: 'test-secret-that-is-long-enough-for-the-check',
-    LOG_LEVEL: 'silent',
+    LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent',
     SERVE_APPS: 'false',
     // Tests tell the server which address each "client" has, so throttles stay per test.
     TRUST_PROXY: 'loopback',
@@ -34,7 +34,7 @@ export interface TestContext {
 /** An in-process app on the test database. Call close() in afterAll. */
 export function createTestContext(overrides: Record<string, string> = {}): TestContext {
   const config = testConfig(overrides);
-  const logger = createLogger('silent');
+  const logger = createLogger(process.env.TEST_LOG_LEVEL ?? 'silent');
   const db = createDb(config.DATABASE_URL, logger, 5);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
   const { app, close } = createApp({ config, db, logger, mailer });
@@ -52,8 +52,8 @@ export function createTestContext(overrides: Record<string, string> = {}): TestC
 
 /** A client address from the IPv6 documentation range (RFC 3849), unique per call. */
 export function clientAddress(): string {
-  const hex = randomBytes(8).toString('hex').match(/.{4}/g)!.join(':');
-  return `2001:db8:${hex.slice(0, 14)}`;
+  const groups = randomBytes(12).toString('hex').match(/.{4}/g)!.join(':');
+  return `2001:db8:${groups}`;
 }
 
 /** A browser-like client: keeps cookies, fetched the CSRF token, comes from its own address. */

@@ -4,6 +4,8 @@ import { StationAwaitingPairing } from '@/features/station/components/station-aw
 
 export function Component() {
   const shop = useShop();
+  // Kiosk queries retry without end, so they never reach an error state; a failed try is the cue.
+  const unreachable = !shop.data && shop.failureCount > 0;
 
   return (
     <div className="flex min-h-full flex-col">
@@ -14,7 +16,7 @@ export function Component() {
       <main className="flex flex-1 flex-col items-center justify-center gap-8 px-8 py-12">
         {shop.data ? (
           <StationAwaitingPairing shopName={shop.data.name} />
-        ) : shop.isError ? (
+        ) : unreachable ? (
           <p role="alert" className="text-kiosk-lead text-balance text-center">
             The shop’s server does not answer yet. This screen keeps trying.
           </p>

@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import type { Passport } from 'passport';
@@ -13,8 +14,10 @@ import { authService } from './auth.service';
 
 const invalidCredentials = () => new AppError(401, 'invalid_credentials', 'That e-mail and password do not match an active account.');
 
+/** The client's address; a forwarded value that is not an address falls back to the peer's. */
 function clientIp(req: Request): string {
-  return req.ip ?? req.socket.remoteAddress ?? '0.0.0.0';
+  const candidates = [req.ip, req.socket.remoteAddress];
+  return candidates.find((ip): ip is string => Boolean(ip && isIP(ip))) ?? '0.0.0.0';
 }
 
 export function authRoutes(deps: Deps, passport: InstanceType<typeof Passport>): Router {

@@ -1,0 +1,123 @@
+import { PASSWORD_MIN, fullName, invitationAcceptSchema, type InvitationPreview, type User } from '@chuckkey/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { QueryError } from '../../../components/ui/query-error';
+import { Spinner } from '../../../components/ui/spinner';
+import { TextField } from '../../../components/ui/text-field';
+import { ApiError } from '../../../lib/api-client';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
+import { useAcceptInvitation } from '../api/accept-invitation';
+import { useInvitationPreview } from '../api/get-invitation-preview';
+
+const formSchema = invitationAcceptSchema
+  .pick({ password: true })
+  .extend({ confirmPassword: confirmPasswordSchema })
+  .refine((values) => values.password === values.confirmPassword, {
+    path: ['confirmPassword'],
+    error: passwordsDifferMessage,
+  });
+
+export function InvitationUnusable() {
+  return (
+    <Alert tone="error" title="This invitation no longer works">
+      It has expired, was already used, or the link got cut short. Ask the admin who invited you to send a new
+      one.
+    </Alert>
+  );
+}
+
+interface AcceptFormProps {
+  token: string;
+  preview: InvitationPreview;
+  onAccepted: (user: User) => void;
+}
+
+function AcceptForm({ token, preview, onAccepted }: AcceptFormProps) {
+  const accept = useAcceptInvitation();
+  const [formError, setFormError] = useState<string | null>(null);
+  const [unusable, setUnusable] = useState(false);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(formSchema), defaultValues: { password: '', confirmPassword: '' } });
+
+  const onSubmit = handleSubmit(async ({ password }) => {
+    setFormError(null);
+    try {
+      onAccepted(await accept.mutateAsync({ token, password }));
+    } catch (error) {
+      if (error instanceof ApiError && (error.code === 'invitation_not_found' || error.code === 'invalid_token')) {
+        setUnusable(true);
+        return;
+      }
+      setFormError(applyServerErrors(error, setError, ['password']));
+    }
+  });
+
+  if (unusable) return <InvitationUnusable />;
+
+  return (
+    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
+      {formError && <Alert tone="error">{formError}</Alert>}
+      <input type="email" name="username" autoComplete="username" value={preview.email} readOnly hidden />
+      <dl>
+        <dt className="font-bold text-neutral-900">Your e-mail</dt>
+        <dd className="break-all text-neutral-800">{preview.email}</dd>
+      </dl>
+      <TextField
+        label="Password"
+        hint={`Choose one of at least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
+        type="password"
+        autoComplete="new-password"
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <TextField
+        label="Confirm password"
+        type="password"
+        autoComplete="new-password"
+        error={errors.confirmPassword?.message}
+        {...register('confirmPassword')}
+      />
+      <Button type="submit" pending={accept.isPending} className="w-full">
+        Join the shop
+      </Button>
+    </form>
+  );
+}
+
+interface AcceptInvitationProps {
+  token: string;
+  onAccepted: (user: User) => void;
+}
+
+export function AcceptInvitation({ token, onAccepted }: AcceptInvitationProps) {
+  const preview = useInvitationPreview(token);
+
+  if (preview.isPending) return <Spinner label="Opening your invitation…" />;
+  if (preview.isError) {
+    if (preview.error instanceof ApiError && preview.error.status === 404) return <InvitationUnusable />;
+    return (
+      <QueryError error={preview.error} what="your invitation" onRetry={() => void preview.refetch()} retrying={preview.isFetching} />
+    );
+  }
+
+  const { firstName, lastName, shopName } = preview.data;
+  return (
+    <div className="flex flex-col gap-5">
+      <div className="flex flex-col gap-1">
+        <h1 className="text-2xl font-bold text-neutral-900">Welcome, {fullName(firstName, lastName)}</h1>
+        <p className="text-neutral-800">
+          You are invited to join <strong>{shopName}</strong>. Choose a password to finish, and you are signed in.
+        </p>
+      </div>
+      <AcceptForm token={token} preview={preview.data} onAccepted={onAccepted} />
+    </div>
+  );
+}

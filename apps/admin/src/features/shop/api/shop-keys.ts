@@ -1,0 +1,4 @@
+export const shopKeys = {
+  all: ['shop'] as const,
+  detail: () => [...shopKeys.all, 'detail'] as const,
+};

@@ -1,0 +1,39 @@
+import { describe, expect, it } from 'vitest';
+import { can, permissions, permissionsByRole, roles } from './roles';
+
+describe('can()', () => {
+  it('lets a member read and change their own profile and read the machines', () => {
+    expect(can('member', 'read:profile:own')).toBe(true);
+    expect(can('member', 'update:profile:own')).toBe(true);
+    expect(can('member', 'read:machine:any')).toBe(true);
+  });
+
+  it('keeps a member out of the member list, invitations and the outbox', () => {
+    expect(can('member', 'read:member:any')).toBe(false);
+    expect(can('member', 'update:member:any')).toBe(false);
+    expect(can('member', 'create:invitation:any')).toBe(false);
+    expect(can('member', 'read:invitation:any')).toBe(false);
+    expect(can('member', 'read:outbox:any')).toBe(false);
+  });
+
+  it('gives an instructor the same reach as a member, no admin work', () => {
+    for (const permission of permissions) {
+      expect(can('instructor', permission), permission).toBe(can('member', permission));
+    }
+    expect(can('instructor', 'read:member:any')).toBe(false);
+  });
+
+  it('lets an admin do everything in the permission list', () => {
+    for (const permission of permissions) {
+      expect(can('admin', permission), permission).toBe(true);
+    }
+  });
+
+  it('maps every role to permissions from the list only', () => {
+    for (const role of roles) {
+      for (const permission of permissionsByRole[role]) {
+        expect(permissions, `${role}: ${permission}`).toContain(permission);
+      }
+    }
+  });
+});
