@@ -100,17 +100,26 @@ interface AcceptInvitationProps {
 export function AcceptInvitation({ token, onAccepted }: AcceptInvitationProps) {
   const preview = useInvitationPreview(token);
 
-  if (preview.isPending) return <Spinner label="Opening your invitation…" />;
-  if (preview.isError) {
-    if (preview.error instanceof ApiError && preview.error.status === 404) return <InvitationUnusable />;
+  if (!preview.data) {
     return (
-      <QueryError error={preview.error} what="your invitation" onRetry={() => void preview.refetch()} retrying={preview.isFetching} />
+      <div className="flex flex-col gap-5">
+        <title>Your invitation · Chuckkey</title>
+        <h1 className="text-2xl font-bold text-neutral-900">Your invitation</h1>
+        {preview.isPending ? (
+          <Spinner label="Opening your invitation…" />
+        ) : preview.error instanceof ApiError && preview.error.status === 404 ? (
+          <InvitationUnusable />
+        ) : (
+          <QueryError error={preview.error} what="your invitation" onRetry={() => void preview.refetch()} retrying={preview.isFetching} />
+        )}
+      </div>
     );
   }
 
   const { firstName, lastName, shopName } = preview.data;
   return (
     <div className="flex flex-col gap-5">
+      <title>{`Join ${shopName} · Chuckkey`}</title>
       <div className="flex flex-col gap-1">
         <h1 className="text-2xl font-bold text-neutral-900">Welcome, {fullName(firstName, lastName)}</h1>
         <p className="text-neutral-800">

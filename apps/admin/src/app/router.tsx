@@ -1,0 +1,40 @@
+import type { ComponentType } from 'react';
+import { createBrowserRouter } from 'react-router-dom';
+import { paths } from '../config/paths';
+import { RootError, RootLayout, RouteLoading } from './routes/root';
+
+/** Each page arrives as its own chunk, fetched the first time someone opens it. */
+function page(load: () => Promise<{ default: ComponentType }>) {
+  return async () => ({ Component: (await load()).default });
+}
+
+export function createAppRouter() {
+  return createBrowserRouter([
+    {
+      Component: RootLayout,
+      ErrorBoundary: RootError,
+      HydrateFallback: RouteLoading,
+      children: [
+        {
+          lazy: page(() => import('./routes/public-layout')),
+          children: [
+            { path: paths.signIn.path, lazy: page(() => import('./routes/sign-in')) },
+            { path: paths.forgotPassword.path, lazy: page(() => import('./routes/forgot-password')) },
+            { path: paths.resetPassword.path, lazy: page(() => import('./routes/reset-password')) },
+            { path: paths.acceptInvitation.path, lazy: page(() => import('./routes/accept-invitation')) },
+          ],
+        },
+        {
+          lazy: page(() => import('./routes/app-layout')),
+          children: [
+            { index: true, lazy: page(() => import('./routes/shop-floor')) },
+            { path: paths.profile.path, lazy: page(() => import('./routes/profile')) },
+            { path: paths.people.path, lazy: page(() => import('./routes/people')) },
+            { path: paths.outbox.path, lazy: page(() => import('./routes/outbox')) },
+            { path: '*', lazy: page(() => import('./routes/not-found')) },
+          ],
+        },
+      ],
+    },
+  ]);
+}

@@ -1,0 +1,86 @@
+import { PASSWORD_MIN, passwordChangeSchema } from '@chuckkey/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Panel } from '../../../components/ui/panel';
+import { TextField } from '../../../components/ui/text-field';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
+import { useChangePassword } from '../api/change-password';
+
+const formSchema = passwordChangeSchema
+  .extend({ confirmNewPassword: confirmPasswordSchema })
+  .refine((values) => values.newPassword === values.confirmNewPassword, {
+    path: ['confirmNewPassword'],
+    error: passwordsDifferMessage,
+  });
+
+const emptyForm = { currentPassword: '', newPassword: '', confirmNewPassword: '' };
+
+const errorOptions = {
+  codeFields: { wrong_password: 'currentPassword' as const },
+  messages: { wrong_password: 'That is not your current password.' },
+};
+
+export function PasswordForm() {
+  const changePassword = useChangePassword();
+  const [formError, setFormError] = useState<string | null>(null);
+  const [changed, setChanged] = useState(false);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    reset,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(formSchema), defaultValues: emptyForm });
+
+  const onSubmit = handleSubmit(async ({ currentPassword, newPassword }) => {
+    setFormError(null);
+    setChanged(false);
+    try {
+      await changePassword.mutateAsync({ currentPassword, newPassword });
+      reset(emptyForm);
+      setChanged(true);
+    } catch (error) {
+      setFormError(applyServerErrors(error, setError, ['currentPassword', 'newPassword'], errorOptions));
+    }
+  });
+
+  return (
+    <Panel title="Password">
+      <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
+        {formError && <Alert tone="error">{formError}</Alert>}
+        {changed && <Alert tone="success">Your password is changed. Use the new one next time you sign in.</Alert>}
+        <TextField
+          label="Current password"
+          type="password"
+          autoComplete="current-password"
+          error={errors.currentPassword?.message}
+          {...register('currentPassword')}
+        />
+        <TextField
+          label="New password"
+          hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
+          type="password"
+          autoComplete="new-password"
+          error={errors.newPassword?.message}
+          {...register('newPassword')}
+        />
+        <TextField
+          label="Confirm new password"
+          type="password"
+          autoComplete="new-password"
+          error={errors.confirmNewPassword?.message}
+          {...register('confirmNewPassword')}
+        />
+        <div>
+          <Button type="submit" pending={changePassword.isPending}>
+            Change password
+          </Button>
+        </div>
+      </form>
+    </Panel>
+  );
+}
