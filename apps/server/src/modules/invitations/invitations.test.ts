@@ -172,6 +172,19 @@ describe('POST /api/invitations/accept', () => {
     expect(later.body.id).toBe(res.body.id);
   });
 
+  it('after accepting, the page goes on with the same CSRF token', async () => {
+    const admin = await signedIn(ctx, 'admin');
+    const { token } = await invite(admin);
+    const visitor = await browser(ctx);
+    expect((await visitor.post('/api/invitations/accept', { token, password: NEW_PASSWORD })).status).toBe(200);
+
+    const csrf = await visitor.get('/api/auth/csrf');
+    const logout = await visitor.post('/api/auth/logout');
+
+    expect(csrf.body.token).toBe(visitor.token);
+    expect(logout.status).toBe(204);
+  });
+
   it('once used, the link answers 404 invitation_not_found on preview and on accept', async () => {
     const admin = await signedIn(ctx, 'admin');
     const { token } = await invite(admin);

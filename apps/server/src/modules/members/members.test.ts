@@ -17,7 +17,9 @@ function uniqueLastName(prefix = 'Knurl'): string {
 }
 
 function membersQuery(params: Record<string, string | number>): string {
-  return `/api/members?${new URLSearchParams(Object.entries(params).map(([k, v]) => [k, String(v)])).toString()}`;
+  const query = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) query.set(key, String(value));
+  return `/api/members?${query.toString()}`;
 }
 
 describe('GET /api/members', () => {
@@ -91,6 +93,19 @@ describe('GET /api/members', () => {
     expect(res.status).toBe(200);
     expect(res.body.items.map((m: { id: string }) => m.id)).toEqual([wanted.id]);
     expect(res.body.total).toBe(1);
+  });
+
+  it('treats % and _ in the search as plain characters, not wildcards', async () => {
+    const lastName = uniqueLastName();
+    await createMember(ctx.db, { last_name: lastName });
+    const admin = await signedIn(ctx, 'admin');
+
+    const percent = await admin.get(membersQuery({ search: `${lastName}%` }));
+    const underscore = await admin.get(membersQuery({ search: `${lastName.slice(0, -1)}_` }));
+
+    expect(percent.status).toBe(200);
+    expect(percent.body.total).toBe(0);
+    expect(underscore.body.total).toBe(0);
   });
 
   it('with a role filter, lists only people with that role', async () => {
