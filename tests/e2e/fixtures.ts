@@ -1,7 +1,7 @@
 import { test as base, expect, type Page } from '@playwright/test';
 import type { Role } from '@chuckkey/core';
 import { knexConfig } from '@chuckkey/db';
-import { createMember, deleteMembers, ensureShop, type CreatedMember } from '@chuckkey/db/factories';
+import { createMember, deleteMembers, ensureShop, uniqueEmail, type CreatedMember } from '@chuckkey/db/factories';
 import knexFactory, { type Knex } from 'knex';
 
 export { expect };
@@ -19,6 +19,8 @@ interface TestFixtures {
   createUser: (overrides?: MemberOverrides) => Promise<CreatedMember>;
   /** Creates a person with this role and signs them in through the sign-in page. */
   signInAs: (role: Role) => Promise<CreatedMember>;
+  /** An address with no account; the sign-in attempts made with it are deleted after the test. */
+  unknownEmail: string;
 }
 
 interface WorkerFixtures {
@@ -78,6 +80,12 @@ export const test = base.extend<TestFixtures, WorkerFixtures>({
       db,
       created.map((member) => member.id),
     );
+  },
+
+  unknownEmail: async ({ db }, use) => {
+    const email = uniqueEmail('nobody');
+    await use(email);
+    await db('sign_in_attempts').where({ email }).delete();
   },
 
   signInAs: async ({ page, createUser }, use) => {
