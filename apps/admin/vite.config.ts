@@ -4,7 +4,7 @@ import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vite';
 
 // The API and the socket live on the server's origin; in development the proxy keeps the
-// browser on one origin so that session cookies and the CSRF token behave as in production.
+// browser on one origin so that the web session cookie and the CSRF token behave as in production.
 const serverOrigin = 'http://127.0.0.1:3000';
 
 export default defineConfig({

@@ -4,7 +4,7 @@ import { useClearSignedInUser } from '../features/auth/hooks/use-clear-signed-in
 import { api } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
 
-function SessionWatch() {
+function SignInWatch() {
   const clearSignedInUser = useClearSignedInUser();
   useEffect(() => api.onUnauthorized(clearSignedInUser), [clearSignedInUser]);
   return null;
@@ -13,7 +13,7 @@ function SessionWatch() {
 export function AppProvider({ children }: { children: ReactNode }) {
   return (
     <QueryClientProvider client={queryClient}>
-      <SessionWatch />
+      <SignInWatch />
       {children}
     </QueryClientProvider>
   );

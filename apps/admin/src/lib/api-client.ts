@@ -30,7 +30,7 @@ export class ApiError extends Error {
   }
 }
 
-export const API_BASE = '/api';
+const API_BASE = '/api';
 
 const fallbackTitles: Record<number, string> = {
   400: 'The request was not accepted.',
@@ -65,7 +65,7 @@ export function parseProblem(status: number, body: unknown): ApiError {
   });
 }
 
-export function networkError(cause?: unknown): ApiError {
+function networkError(cause?: unknown): ApiError {
   return new ApiError(
     {
       status: 0,
@@ -159,7 +159,7 @@ export function createApiClient(options: ApiClientOptions = {}) {
     return parsed.data.token;
   }
 
-  // The token belongs to the server session and survives sign-in, so one fetch per page load
+  // The token belongs to the web session and survives sign-in, so one fetch per page load
   // is enough; a failed fetch is forgotten so that the next call tries again.
   function currentCsrfToken(): Promise<string> {
     csrfToken ??= fetchCsrfToken().catch((error: unknown) => {
@@ -189,7 +189,7 @@ export function createApiClient(options: ApiClientOptions = {}) {
     if (!response.ok) {
       const error = parseProblem(response.status, body);
       if (error.status === 403 && error.code === 'csrf_invalid' && csrf && !isRetry) {
-        // The session behind the token ended (sign-out, expiry): one fresh token, one more try.
+        // The web session behind the token ended (sign-out, expiry): one fresh token, one more try.
         csrfToken = undefined;
         return request(method, path, init, true);
       }
@@ -223,7 +223,5 @@ export function createApiClient(options: ApiClientOptions = {}) {
     },
   };
 }
-
-export type ApiClient = ReturnType<typeof createApiClient>;
 
 export const api = createApiClient();

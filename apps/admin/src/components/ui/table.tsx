@@ -55,7 +55,7 @@ export function Td({ className, ...props }: ComponentProps<'td'>) {
   return <td className={cn('px-4 py-3 text-neutral-900', className)} {...props} />;
 }
 
-export type SortOrder = 'asc' | 'desc';
+type SortOrder = 'asc' | 'desc';
 
 interface SortableThProps {
   label: string;

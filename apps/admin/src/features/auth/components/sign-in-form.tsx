@@ -1,4 +1,4 @@
-import { loginSchema, type User } from '@chuckkey/core';
+import { loginSchema } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -13,7 +13,8 @@ const messages = {
   too_many_attempts: 'Too many tries in a short time. Wait a few minutes, then try again.',
 };
 
-export function SignInForm({ onSignedIn }: { onSignedIn: (user: User) => void }) {
+/** On success the signed-in person's query is filled; the page decides where to go next. */
+export function SignInForm() {
   const signIn = useSignIn();
   const [formError, setFormError] = useState<string | null>(null);
   const {
@@ -27,7 +28,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: User) => void })
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     try {
-      onSignedIn(await signIn.mutateAsync(values));
+      await signIn.mutateAsync(values);
     } catch (error) {
       resetField('password');
       setFormError(applyServerErrors(error, setError, ['email', 'password'], { messages }));

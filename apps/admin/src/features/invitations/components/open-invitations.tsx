@@ -1,9 +1,8 @@
-import { roleLabels, fullName } from '@chuckkey/core';
+import { fullName, roleLabels } from '@chuckkey/core';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Panel } from '../../../components/ui/panel';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
-import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { formatDate } from '../../../lib/format';
 import { useInvitations } from '../api/get-invitations';
 
@@ -26,28 +25,20 @@ export function OpenInvitations({ timeZone }: { timeZone: string | undefined }) 
           Invite someone with the form, and their invitation waits here until they accept it.
         </EmptyState>
       ) : (
-        <Table caption="Open invitations">
-          <THead>
-            <Tr>
-              <Th>Name</Th>
-              <Th>E-mail</Th>
-              <Th>Role</Th>
-              <Th>Invited by</Th>
-              <Th>Link works until</Th>
-            </Tr>
-          </THead>
-          <TBody>
-            {invitations.data.map((invitation) => (
-              <Tr key={invitation.id}>
-                <Td className="font-bold">{fullName(invitation.firstName, invitation.lastName)}</Td>
-                <Td className="break-all">{invitation.email}</Td>
-                <Td>{roleLabels[invitation.role]}</Td>
-                <Td>{invitation.invitedBy}</Td>
-                <Td className="whitespace-nowrap">{formatDate(invitation.expiresAt, timeZone)}</Td>
-              </Tr>
-            ))}
-          </TBody>
-        </Table>
+        <ul aria-label="Open invitations" className="divide-y divide-neutral-200 rounded-lg border border-neutral-300">
+          {invitations.data.map((invitation) => (
+            <li key={invitation.id} className="flex flex-col gap-1 px-4 py-3">
+              <p className="flex flex-wrap items-baseline justify-between gap-x-3">
+                <span className="font-bold text-neutral-900">{fullName(invitation.firstName, invitation.lastName)}</span>
+                <span className="text-neutral-800">{roleLabels[invitation.role]}</span>
+              </p>
+              <p className="break-all text-neutral-800">{invitation.email}</p>
+              <p className="text-sm text-neutral-700">
+                Invited by {invitation.invitedBy} · the link works until {formatDate(invitation.expiresAt, timeZone)}
+              </p>
+            </li>
+          ))}
+        </ul>
       )}
     </Panel>
   );

@@ -12,13 +12,20 @@ export function MemberSearch({ value, onSearch }: MemberSearchProps) {
   const [text, setText] = useState(value);
   const debounced = useDebouncedValue(text, 300);
   const sent = useRef(value);
+  const [shown, setShown] = useState(value);
+
+  // The back button can change the search in the URL; the box follows unless it is what was typed.
+  if (value !== shown) {
+    setShown(value);
+    if (value !== debounced.trim()) setText(value);
+  }
 
   useEffect(() => {
     const search = debounced.trim();
     if (search === sent.current) return;
     sent.current = search;
-    onSearch(search);
-  }, [debounced, onSearch]);
+    if (search !== value) onSearch(search);
+  }, [debounced, onSearch, value]);
 
   return (
     <TextField

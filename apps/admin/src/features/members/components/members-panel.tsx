@@ -1,5 +1,6 @@
 import { roleLabels, roleSchema, roles } from '@chuckkey/core';
 import { useCallback, useState } from 'react';
+import { WIDE_SCREEN, useMediaQuery } from '../../../hooks/use-media-query';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { DownloadIcon } from '../../../components/ui/icons';
@@ -9,7 +10,8 @@ import { SelectField } from '../../../components/ui/select-field';
 import { Spinner } from '../../../components/ui/spinner';
 import { useMembers } from '../api/get-members';
 import { useMemberFilters } from '../hooks/use-member-filters';
-import { membersCsvHref, nextSort } from '../utils/member-filters';
+import { memberSortChoices, membersCsvHref, nextSort, readSortChoice, sortChoiceValue } from '../utils/member-filters';
+import { MemberCards } from './member-cards';
 import { MemberChangeDialog, type MemberChange } from './member-change-dialog';
 import { MemberSearch } from './member-search';
 import { MembersTable } from './members-table';
@@ -25,6 +27,7 @@ export function MembersPanel({ currentUserId, timeZone }: MembersPanelProps) {
   const [change, setChange] = useState<MemberChange | null>(null);
   const onSearch = useCallback((search: string) => update({ search }), [update]);
   const filtered = Boolean(filters.search || filters.role);
+  const wide = useMediaQuery(WIDE_SCREEN);
 
   return (
     <section aria-labelledby="members-heading" className="flex flex-col gap-4">
@@ -50,6 +53,22 @@ export function MembersPanel({ currentUserId, timeZone }: MembersPanelProps) {
             </option>
           ))}
         </SelectField>
+        {!wide && (
+          <SelectField
+            label="Sort by"
+            value={sortChoiceValue(filters)}
+            onChange={(event) => {
+              const choice = readSortChoice(event.target.value);
+              if (choice) update(choice);
+            }}
+          >
+            {memberSortChoices.map((choice) => (
+              <option key={sortChoiceValue(choice)} value={sortChoiceValue(choice)}>
+                {choice.label}
+              </option>
+            ))}
+          </SelectField>
+        )}
         <a href={membersCsvHref(filters)} download className={buttonClasses('secondary', 'md:self-end')}>
           <DownloadIcon />
           Export CSV
@@ -81,14 +100,18 @@ export function MembersPanel({ currentUserId, timeZone }: MembersPanelProps) {
         )
       ) : (
         <div className={members.isPlaceholderData ? 'opacity-60 transition-opacity' : undefined} aria-busy={members.isPlaceholderData}>
-          <MembersTable
-            members={members.data.items}
-            filters={filters}
-            currentUserId={currentUserId}
-            timeZone={timeZone}
-            onSort={(sort) => update(nextSort(filters, sort))}
-            onChange={setChange}
-          />
+          {wide ? (
+            <MembersTable
+              members={members.data.items}
+              filters={filters}
+              currentUserId={currentUserId}
+              timeZone={timeZone}
+              onSort={(sort) => update(nextSort(filters, sort))}
+              onChange={setChange}
+            />
+          ) : (
+            <MemberCards members={members.data.items} currentUserId={currentUserId} timeZone={timeZone} onChange={setChange} />
+          )}
         </div>
       )}
 
@@ -97,7 +120,7 @@ export function MembersPanel({ currentUserId, timeZone }: MembersPanelProps) {
           page={filters.page}
           pageSize={filters.pageSize}
           total={members.data.total}
-          noun="members"
+          nouns={['member', 'members']}
           onPageChange={(page) => update({ page })}
         />
       )}

@@ -3,7 +3,37 @@ import { apiHref } from '../../../lib/api-client';
 
 export type MemberSort = MemberListQuery['sort'];
 
-export const MEMBERS_PAGE_SIZE = 25;
+const MEMBERS_PAGE_SIZE = 25;
+
+export const memberColumns: { sort: MemberSort; label: string }[] = [
+  { sort: 'name', label: 'Name' },
+  { sort: 'email', label: 'E-mail' },
+  { sort: 'role', label: 'Role' },
+  { sort: 'createdAt', label: 'Joined' },
+];
+
+type SortChoice = Pick<MemberListQuery, 'sort' | 'order'>;
+
+/** On a phone there are no column headers to click; one list names every order in words. */
+export const memberSortChoices: (SortChoice & { label: string })[] = [
+  { sort: 'name', order: 'asc', label: 'Name, A to Z' },
+  { sort: 'name', order: 'desc', label: 'Name, Z to A' },
+  { sort: 'email', order: 'asc', label: 'E-mail, A to Z' },
+  { sort: 'email', order: 'desc', label: 'E-mail, Z to A' },
+  { sort: 'role', order: 'asc', label: 'Role, ascending' },
+  { sort: 'role', order: 'desc', label: 'Role, descending' },
+  { sort: 'createdAt', order: 'desc', label: 'Joined, newest first' },
+  { sort: 'createdAt', order: 'asc', label: 'Joined, oldest first' },
+];
+
+export function sortChoiceValue(choice: SortChoice): string {
+  return `${choice.sort}:${choice.order}`;
+}
+
+export function readSortChoice(value: string): SortChoice | undefined {
+  const choice = memberSortChoices.find((option) => sortChoiceValue(option) === value);
+  return choice && { sort: choice.sort, order: choice.order };
+}
 
 const defaults = memberListQuerySchema.parse({ pageSize: MEMBERS_PAGE_SIZE });
 const urlKeys = ['search', 'role', 'page', 'sort', 'order'] as const;

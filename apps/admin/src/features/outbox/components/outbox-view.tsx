@@ -12,7 +12,7 @@ import { useOutbox } from '../api/get-outbox';
 import { useOutboxSelection } from '../hooks/use-outbox-selection';
 import { MessageBody } from './message-body';
 
-export const OUTBOX_PAGE_SIZE = 25;
+const OUTBOX_PAGE_SIZE = 25;
 
 function MessageDetail({ message, timeZone }: { message: OutboxMessage; timeZone: string | undefined }) {
   const headingRef = useRef<HTMLHeadingElement>(null);
@@ -91,7 +91,7 @@ export function OutboxView({ timeZone }: { timeZone: string | undefined }) {
             );
           })}
         </ul>
-        <Pagination page={page} pageSize={OUTBOX_PAGE_SIZE} total={outbox.data.total} noun="messages" onPageChange={goToPage} />
+        <Pagination page={page} pageSize={OUTBOX_PAGE_SIZE} total={outbox.data.total} nouns={['message', 'messages']} onPageChange={goToPage} />
       </section>
 
       {selected ? (
