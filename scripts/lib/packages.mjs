@@ -53,7 +53,9 @@ export async function aptInstall(packages, why) {
   note('apt-get update');
   await run('apt-get', ['update'], { env, fix: 'check that the machine can reach Debian\'s package mirrors' });
   note(`apt-get install ${packages.join(' ')}`);
-  await run('apt-get', ['install', '-y', '--no-install-recommends', ...packages], {
+  // Keep any configuration file already on the machine instead of stopping to ask.
+  const dpkgOptions = ['-o', 'Dpkg::Options::=--force-confdef', '-o', 'Dpkg::Options::=--force-confold'];
+  await run('apt-get', ['install', '-y', '--no-install-recommends', ...dpkgOptions, ...packages], {
     env,
     fix: `install them yourself: apt-get install -y ${packages.join(' ')}`,
   });
