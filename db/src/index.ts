@@ -1,3 +1,3 @@
 export { knexConfig, migrationsDirectory, seedsDirectory } from './config';
 export { hashPassword, verifyPassword, argon2Options } from './passwords';
-export { setupDatabase, isSeeded, ensureDatabaseExists } from './setup';
+export { setupDatabase, isSeeded, ensureDatabaseExists, dropDatabase } from './setup';

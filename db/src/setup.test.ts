@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { machineCategories } from '@chuckkey/core';
 import { knexConfig } from './config';
 import { verifyPassword } from './passwords';
-import { setupDatabase } from './setup';
+import { dropDatabase, setupDatabase } from './setup';
 
 // Knex imports migration and seed files at run time; tsx lets this process import TypeScript.
 register();
@@ -13,18 +13,9 @@ const url = process.env.DATABASE_URL;
 if (!url) throw new Error('DATABASE_URL must name a database these tests may drop and create (npm test sets it).');
 const databaseUrl: string = url;
 
-async function recreate(): Promise<void> {
-  const adminUrl = new URL(databaseUrl);
-  const name = decodeURIComponent(adminUrl.pathname.slice(1));
-  adminUrl.pathname = '/postgres';
-  const admin = knexFactory(knexConfig(adminUrl.toString(), { min: 0, max: 1 }));
-  await admin.raw('drop database if exists ?? with (force)', [name]);
-  await admin.destroy();
-}
-
 let db: Knex;
 beforeAll(async () => {
-  await recreate();
+  await dropDatabase(databaseUrl);
   await setupDatabase(databaseUrl, { seed: true });
   db = knexFactory(knexConfig(databaseUrl, { min: 0, max: 2 }));
 });

@@ -6,13 +6,29 @@ export async function isSeeded(db: Knex): Promise<boolean> {
   return Number(row?.count ?? 0) > 0;
 }
 
-/** Creates the database named in the URL when it does not exist yet (connecting to `postgres`). */
-export async function ensureDatabaseExists(connectionString: string): Promise<void> {
+function maintenanceUrl(connectionString: string): { url: string; name: string } {
   const url = new URL(connectionString);
   const name = decodeURIComponent(url.pathname.replace(/^\//, ''));
   if (!name) throw new Error('DATABASE_URL names no database.');
   url.pathname = '/postgres';
-  const admin = knexFactory(knexConfig(url.toString(), { min: 0, max: 1 }));
+  return { url: url.toString(), name };
+}
+
+/** Drops the database named in the URL, if it exists (for test databases only). */
+export async function dropDatabase(connectionString: string): Promise<void> {
+  const { url, name } = maintenanceUrl(connectionString);
+  const admin = knexFactory(knexConfig(url, { min: 0, max: 1 }));
+  try {
+    await admin.raw('drop database if exists ?? with (force)', [name]);
+  } finally {
+    await admin.destroy();
+  }
+}
+
+/** Creates the database named in the URL when it does not exist yet (connecting to `postgres`). */
+export async function ensureDatabaseExists(connectionString: string): Promise<void> {
+  const { url, name } = maintenanceUrl(connectionString);
+  const admin = knexFactory(knexConfig(url, { min: 0, max: 1 }));
   try {
     const found = await admin.raw('select 1 from pg_database where datname = ?', [name]);
     if (found.rows.length === 0) {

@@ -2,7 +2,7 @@ import knexFactory from 'knex';
 import { register } from 'tsx/esm/api';
 import type { TestProject } from 'vitest/node';
 import { ensureShop } from '@chuckkey/db/factories';
-import { knexConfig, setupDatabase } from '@chuckkey/db';
+import { dropDatabase, knexConfig, setupDatabase } from '@chuckkey/db';
 import { createLogger } from '../lib/logger';
 import { startMailCatcher } from '../modules/outbox/mail-catcher';
 
@@ -19,12 +19,7 @@ export default async function setup(project: TestProject) {
   const unregister = register();
   const databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) throw new Error('DATABASE_URL must name a database the server tests may drop and create (npm test sets it).');
-  const adminUrl = new URL(databaseUrl);
-  const name = decodeURIComponent(adminUrl.pathname.slice(1));
-  adminUrl.pathname = '/postgres';
-  const admin = knexFactory(knexConfig(adminUrl.toString(), { min: 0, max: 1 }));
-  await admin.raw('drop database if exists ?? with (force)', [name]);
-  await admin.destroy();
+  await dropDatabase(databaseUrl);
   await setupDatabase(databaseUrl, { seed: false });
   await unregister();
 

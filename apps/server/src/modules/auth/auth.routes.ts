@@ -1,11 +1,11 @@
 import { isIP } from 'node:net';
 import { Router, type Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import type { Passport } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { loginSchema, passwordResetConfirmSchema, passwordResetRequestSchema } from '@chuckkey/core';
 import { AppError } from '../../lib/errors';
 import type { Deps } from '../../lib/deps';
+import { perAddressLimit } from '../../lib/rate-limit';
 import { parse } from '../../lib/validate';
 import { SESSION_COOKIE } from '../../middleware/session';
 import { csrfToken } from '../../middleware/csrf';
@@ -37,13 +37,7 @@ export function authRoutes(deps: Deps, passport: InstanceType<typeof Passport>):
   const router = Router();
 
   // Per process, in memory: mail-sending routes are cheap to abuse.
-  const mailLimit = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: 20,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', 'Too many requests. Wait a few minutes and try again.')),
-  });
+  const mailLimit = perAddressLimit(20);
 
   router.get('/csrf', (req, res) => {
     res.json({ token: csrfToken(req.session) });

@@ -1,8 +1,7 @@
 import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import { invitationAcceptSchema, invitationCreateSchema, tokenParamsSchema } from '@chuckkey/core';
-import { AppError } from '../../lib/errors';
 import type { Deps } from '../../lib/deps';
+import { perAddressLimit } from '../../lib/rate-limit';
 import { parse } from '../../lib/validate';
 import { currentUser, requirePermission } from '../../middleware/auth';
 import { invitationsService } from './invitations.service';
@@ -12,13 +11,7 @@ export function invitationsRoutes(deps: Deps): Router {
   const router = Router();
 
   // Invitation links are unguessable (256 bits), but guessing is still made slow.
-  const tokenLimit = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: 60,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', 'Too many requests. Wait a few minutes and try again.')),
-  });
+  const tokenLimit = perAddressLimit(60);
 
   router.get('/', requirePermission('read:invitation:any'), async (_req, res) => {
     res.json({ items: await service.listOpen() });

@@ -32,19 +32,7 @@ const sortColumns: Record<MemberListQuery['sort'], string[]> = {
   createdAt: ['created_at'],
 };
 
-export function toMember(row: MemberRecord): Member {
-  return {
-    id: row.id,
-    email: row.email,
-    firstName: row.firstName,
-    lastName: row.lastName,
-    name: fullName(row.firstName, row.lastName),
-    role: row.role,
-    active: row.active,
-    createdAt: row.createdAt.toISOString(),
-  };
-}
-
+/** The signed-in person (also the shape of their profile). */
 export function toUser(row: MemberRecord): Express.User {
   return {
     id: row.id,
@@ -54,6 +42,10 @@ export function toUser(row: MemberRecord): Express.User {
     name: fullName(row.firstName, row.lastName),
     role: row.role,
   };
+}
+
+export function toMember(row: MemberRecord): Member {
+  return { ...toUser(row), active: row.active, createdAt: row.createdAt.toISOString() };
 }
 
 function escapeLike(text: string): string {

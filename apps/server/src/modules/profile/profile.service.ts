@@ -1,20 +1,8 @@
 import { hashPassword, verifyPassword } from '@chuckkey/db';
 import type { PasswordChange, Profile, ProfileUpdate } from '@chuckkey/core';
-import { fullName } from '@chuckkey/core';
 import { badRequest, conflict, pgCode, unauthenticated, UNIQUE_VIOLATION } from '../../lib/errors';
 import type { Deps } from '../../lib/deps';
-import { membersRepository, type MemberRecord } from '../members/members.repository';
-
-function toProfile(row: MemberRecord): Profile {
-  return {
-    id: row.id,
-    email: row.email,
-    firstName: row.firstName,
-    lastName: row.lastName,
-    name: fullName(row.firstName, row.lastName),
-    role: row.role,
-  };
-}
+import { membersRepository, toUser as toProfile, type MemberRecord } from '../members/members.repository';
 
 export function profileService({ db }: Deps) {
   const members = membersRepository(db);
