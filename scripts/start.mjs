@@ -1,7 +1,7 @@
 // npm start: sets up everything a fresh machine lacks, then serves Chuckkey.
 import { ensurePnpm, installPackages } from './lib/packages.mjs';
 import { fail, note, step, done } from './lib/log.mjs';
-import { buildApps, healthy, prepareDatabase, projectClusterHome, root, sessionSecret, spawnService, startCluster, startMailCatcher, stopChild, waitFor } from './lib/stack.mjs';
+import { buildApps, healthy, prepareDatabase, projectClusterHome, root, storedSecret, spawnService, startCluster, startMailCatcher, stopChild, waitFor } from './lib/stack.mjs';
 
 const DEMO_ACCOUNTS = [
   ['admin', 'admin@example.org'],
@@ -45,7 +45,12 @@ async function main() {
       database: 'chuckkey',
     }));
   }
-  await prepareDatabase(databaseUrl, { seed: true });
+  const secrets = {
+    SESSION_SECRET: process.env.SESSION_SECRET ?? storedSecret('session-secret'),
+    // The demo shop's badge cards are encrypted with it when they are seeded.
+    BADGE_SECRET: process.env.BADGE_SECRET ?? storedSecret('badge-secret'),
+  };
+  await prepareDatabase(databaseUrl, { seed: true, env: secrets });
   await buildApps();
 
   let smtpUrl = process.env.SMTP_URL;
@@ -63,7 +68,7 @@ async function main() {
     NODE_ENV: process.env.NODE_ENV ?? 'production',
     DATABASE_URL: databaseUrl,
     SMTP_URL: smtpUrl,
-    SESSION_SECRET: process.env.SESSION_SECRET ?? sessionSecret(),
+    ...secrets,
     PORT: String(port),
     HOST: host,
     COOKIE_SECURE: process.env.COOKIE_SECURE ?? 'auto',

@@ -101,6 +101,7 @@ async function main() {
       DATABASE_URL: e2eUrl,
       SMTP_URL: catcher.url,
       SESSION_SECRET: randomBytes(32).toString('hex'),
+      BADGE_SECRET: randomBytes(32).toString('hex'),
       PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport,
       CI: process.env.CI ?? 'true',
     },

@@ -37,11 +37,11 @@ export function projectClusterHome() {
   return clusterHome(root);
 }
 
-export async function prepareDatabase(databaseUrl, { seed }) {
+export async function prepareDatabase(databaseUrl, { seed, env = {} }) {
   step(seed ? 'Preparing the database (migrations, demo shop on first start)' : 'Preparing the database (migrations)');
   await run(bin('db', 'tsx'), ['src/cli.ts', 'setup'], {
     cwd: path.join(root, 'db'),
-    env: { ...process.env, DATABASE_URL: databaseUrl, SEED_DEMO: String(seed) },
+    env: { ...process.env, ...env, DATABASE_URL: databaseUrl, SEED_DEMO: String(seed) },
     fix: 'check that PostgreSQL is running and DATABASE_URL is right; the lines above say which step failed.',
   });
   done('database ready');
@@ -56,9 +56,9 @@ export async function buildApps() {
   done('apps built');
 }
 
-/** A random secret kept in .data so that sign-ins survive a restart. */
-export function sessionSecret() {
-  const file = path.join(root, '.data', 'session-secret');
+/** A random secret kept in .data, so that sign-ins and badge cards survive a restart. */
+export function storedSecret(name) {
+  const file = path.join(root, '.data', name);
   if (!existsSync(file)) {
     mkdirSync(path.dirname(file), { recursive: true });
     writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });

@@ -15,7 +15,7 @@ describe('configuration', () => {
   });
 
   it('a good environment gives defaults and the public address', () => {
-    const config = loadConfig({ DATABASE_URL: 'postgres://u:p@127.0.0.1:5432/db', SESSION_SECRET: 'x'.repeat(32), PORT: '3100', TRUST_PROXY: '1' });
+    const config = loadConfig({ DATABASE_URL: 'postgres://u:p@127.0.0.1:5432/db', SESSION_SECRET: 'x'.repeat(32), BADGE_SECRET: 'b'.repeat(32), PORT: '3100', TRUST_PROXY: '1' });
     expect(config.PORT).toBe(3100);
     expect(config.publicUrl).toBe('http://127.0.0.1:3100');
     expect(config.trustProxy).toBe(1);

@@ -15,6 +15,8 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: 'must be a postgres:// URL' }),
   SESSION_SECRET: z.string().min(32, { error: 'must be at least 32 characters (a random string)' }),
+  // Encrypts the badge codes kept for reprinting cards; without it a database dump shows none.
+  BADGE_SECRET: z.string().min(32, { error: 'must be at least 32 characters (a random string)' }),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: 'must be an smtp:// or smtps:// URL' }).default('smtp://127.0.0.1:2525'),
   MAIL_FROM: z.string().default('Chuckkey <chuckkey@example.org>'),
   PUBLIC_URL: z.url().optional(),

@@ -16,6 +16,7 @@ export function testConfig(overrides: Record<string, string> = {}): Config {
     DATABASE_URL: inject('databaseUrl'),
     SMTP_URL: inject('smtpUrl'),
     SESSION_SECRET: 'test-secret-that-is-long-enough-for-the-check',
+    BADGE_SECRET: 'test-badge-secret-that-is-long-enough-too',
     LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent',
     SERVE_APPS: 'false',
     // Tests tell the server which address each "client" has, so throttles stay per test.

@@ -16,11 +16,17 @@ describe('can()', () => {
     expect(can('member', 'read:outbox:any')).toBe(false);
   });
 
-  it('gives an instructor the same reach as a member, no admin work', () => {
+  it('gives an instructor everything a member has, plus signing off, and no admin work', () => {
     for (const permission of permissions) {
-      expect(can('instructor', permission), permission).toBe(can('member', permission));
+      if (can('member', permission)) expect(can('instructor', permission), permission).toBe(true);
     }
-    expect(can('instructor', 'read:member:any')).toBe(false);
+    for (const permission of ['search:member:any', 'create:sign-off:any', 'revoke:sign-off:any', 'read:sign-off:any'] as const) {
+      expect(can('instructor', permission), permission).toBe(true);
+      expect(can('member', permission), permission).toBe(false);
+    }
+    for (const permission of ['read:member:any', 'update:member:any', 'manage:training:any', 'read:audit:any'] as const) {
+      expect(can('instructor', permission), permission).toBe(false);
+    }
   });
 
   it('lets an admin do everything in the permission list', () => {

@@ -19,11 +19,27 @@ export const permissions = [
   'read:profile:own',
   'update:profile:own',
   'read:machine:any',
+  'read:training:any',
+  'read:sign-off:own',
+  'read:badge:own',
+  'update:pin:own',
+  'update:photo:own',
+  'accept:waiver:own',
+  'search:member:any',
+  'create:sign-off:any',
+  'revoke:sign-off:any',
+  'read:sign-off:any',
   'read:member:any',
   'update:member:any',
   'create:invitation:any',
   'read:invitation:any',
   'read:outbox:any',
+  'manage:machine:any',
+  'manage:training:any',
+  'manage:badge:any',
+  'manage:waiver:any',
+  'manage:station:any',
+  'read:audit:any',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -31,11 +47,26 @@ const memberPermissions: readonly Permission[] = [
   'read:profile:own',
   'update:profile:own',
   'read:machine:any',
+  'read:training:any',
+  'read:sign-off:own',
+  'read:badge:own',
+  'update:pin:own',
+  'update:photo:own',
+  'accept:waiver:own',
+];
+
+/** Instructors sign members off, so they may find members and read their sign-offs. */
+const instructorPermissions: readonly Permission[] = [
+  ...memberPermissions,
+  'search:member:any',
+  'create:sign-off:any',
+  'revoke:sign-off:any',
+  'read:sign-off:any',
 ];
 
 export const permissionsByRole: Record<Role, readonly Permission[]> = {
   member: memberPermissions,
-  instructor: [...memberPermissions],
+  instructor: instructorPermissions,
   admin: [...permissions],
 };
 

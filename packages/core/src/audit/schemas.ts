@@ -1,0 +1,37 @@
+import { z } from 'zod';
+
+export const auditActions = [
+  'sign_off.created',
+  'sign_off.revoked',
+  'member.role_changed',
+  'member.deactivated',
+  'member.reactivated',
+  'badge.issued',
+  'waiver.accepted',
+  'waiver.scan_uploaded',
+  'waiver.published',
+  'station.created',
+  'station.paired',
+  'station.revoked',
+] as const;
+export type AuditAction = (typeof auditActions)[number];
+
+export const auditEntrySchema = z.object({
+  id: z.number().int(),
+  at: z.string(),
+  action: z.string(),
+  actor: z.object({ id: z.uuid(), name: z.string() }).nullable(),
+  member: z.object({ id: z.uuid(), name: z.string() }).nullable(),
+  entity: z.string(),
+  entityId: z.string(),
+  details: z.record(z.string(), z.unknown()),
+});
+export type AuditEntry = z.infer<typeof auditEntrySchema>;
+
+export const auditQuerySchema = z.object({
+  action: z.enum(auditActions).optional(),
+  memberId: z.uuid().optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(50),
+  format: z.enum(['json', 'csv']).default('json'),
+});
