@@ -60,6 +60,9 @@ export async function createMember(
 
 export async function deleteMembers(db: Knex, ids: string[]): Promise<void> {
   if (ids.length === 0) return;
+  // Their sign-offs and audit entries, given or received, go with them.
+  await db('audit_log').whereIn('member_id', ids).orWhereIn('actor_id', ids).delete();
+  await db('sign_offs').whereIn('member_id', ids).orWhereIn('signed_by', ids).orWhereIn('revoked_by', ids).delete();
   await db('invitations').whereIn('invited_by', ids).delete();
   await db('members').whereIn('id', ids).delete();
 }
@@ -116,3 +119,6 @@ export async function createMachine(
   if (!row) throw new Error('machine insert returned no row');
   return row;
 }
+
+export * from './trainings';
+export * from './badges';

@@ -14,6 +14,15 @@ import { membersRoutes } from './modules/members/members.routes';
 import { outboxRoutes } from './modules/outbox/outbox.routes';
 import { profileRoutes } from './modules/profile/profile.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
+import { stationRoutes } from './modules/station/station.routes';
+import { stationsRoutes } from './modules/stations/stations.routes';
+import { badgesRoutes } from './modules/badges/badges.routes';
+import { waiversRoutes } from './modules/waivers/waivers.routes';
+import { auditRoutes } from './modules/audit/audit.routes';
+import { machinesRoutes } from './modules/machines/machines.routes';
+import { signOffsRoutes } from './modules/sign-offs/sign-offs.routes';
+import { teachRoutes } from './modules/teach/teach.routes';
+import { trainingsRoutes } from './modules/trainings/trainings.routes';
 import { staticApps } from './static-apps';
 
 const REQUEST_ID = /^[A-Za-z0-9._-]{1,100}$/;
@@ -61,7 +70,16 @@ export function createApp(deps: Deps) {
   api.use('/members', membersRoutes(deps));
   api.use('/invitations', invitationsRoutes(deps));
   api.use('/outbox', outboxRoutes(deps));
+  api.use('/stations', stationsRoutes(deps));
+  api.use('/station', stationRoutes(deps));
   api.use(shopRoutes(deps));
+  api.use(badgesRoutes(deps));
+  api.use(waiversRoutes(deps));
+  api.use('/trainings', trainingsRoutes(deps));
+  api.use('/teach', teachRoutes(deps));
+  api.use('/audit', auditRoutes(deps));
+  api.use(machinesRoutes(deps));
+  api.use(signOffsRoutes(deps));
   api.use(apiNotFound);
   api.use(problemHandler);
 

@@ -2,6 +2,7 @@ import { loadConfig, ConfigError } from './config';
 import { createApp } from './app';
 import { createDb } from './lib/db';
 import { listen } from './http-server';
+import { startJobs } from './jobs/jobs';
 import { createLogger } from './lib/logger';
 import { createMailer } from './lib/mailer';
 
@@ -19,7 +20,9 @@ async function main(): Promise<void> {
   const logger = createLogger(config.LOG_LEVEL);
   const db = createDb(config.DATABASE_URL, logger);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
-  const { app, close } = createApp({ config, db, logger, mailer });
+  const deps = { config, db, logger, mailer };
+  const { app, close } = createApp(deps);
+  const jobs = await startJobs(deps);
   const http = await listen(app, config.PORT, config.HOST);
   logger.info({ url: `http://${config.HOST}:${http.port}` }, 'Chuckkey is listening');
 
@@ -30,6 +33,7 @@ async function main(): Promise<void> {
     logger.info({ signal }, 'shutting down: finishing requests in flight');
     await http.shutdown();
     await close();
+    await jobs.stop();
     mailer.close();
     await db.destroy();
     logger.info('stopped');

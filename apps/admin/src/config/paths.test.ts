@@ -30,3 +30,16 @@ describe('paths', () => {
     expect(paths.signIn.getHref()).toBe('/sign-in');
   });
 });
+
+describe('paths with ids', () => {
+  it('keeps an id in one segment of the address, whatever it holds', () => {
+    expect(paths.memberRecord.getHref('a/b')).toBe('/teach/members/a%2Fb');
+    expect(paths.setupMachine.getHref('5f0c')).toBe('/setup/machines/5f0c');
+  });
+
+  it('leaves the default view of the sign-off report out of its address', () => {
+    expect(paths.signOffReport.getHref()).toBe('/people/sign-offs');
+    expect(paths.signOffReport.getHref('expiring')).toBe('/people/sign-offs');
+    expect(paths.signOffReport.getHref('expired')).toBe('/people/sign-offs?status=expired');
+  });
+});

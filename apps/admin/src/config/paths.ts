@@ -15,7 +15,33 @@ export const paths = {
     getHref: (token?: string) => withQuery('/accept-invitation', { token }),
   },
   profile: { path: '/profile', getHref: () => '/profile' },
+  myRecord: { path: '/my-record', getHref: () => '/my-record' },
+  teach: { path: '/teach', getHref: () => '/teach' },
+  memberRecord: {
+    path: '/teach/members/:memberId',
+    getHref: (memberId: string) => `/teach/members/${encodeURIComponent(memberId)}`,
+  },
   people: { path: '/people', getHref: () => '/people' },
+  signOffReport: {
+    path: '/people/sign-offs',
+    getHref: (status?: 'expiring' | 'expired') =>
+      withQuery('/people/sign-offs', { status: status === 'expired' ? status : undefined }),
+  },
+  auditLog: { path: '/people/audit-log', getHref: () => '/people/audit-log' },
+  setup: { path: '/setup', getHref: () => '/setup' },
+  setupMachines: { path: '/setup/machines', getHref: () => '/setup/machines' },
+  setupMachineNew: { path: '/setup/machines/new', getHref: () => '/setup/machines/new' },
+  setupMachine: {
+    path: '/setup/machines/:machineId',
+    getHref: (machineId: string) => `/setup/machines/${encodeURIComponent(machineId)}`,
+  },
+  setupTrainings: { path: '/setup/trainings', getHref: () => '/setup/trainings' },
+  setupTrainingNew: { path: '/setup/trainings/new', getHref: () => '/setup/trainings/new' },
+  setupTraining: {
+    path: '/setup/trainings/:trainingId',
+    getHref: (trainingId: string) => `/setup/trainings/${encodeURIComponent(trainingId)}`,
+  },
+  setupWaiver: { path: '/setup/waiver', getHref: () => '/setup/waiver' },
   outbox: { path: '/outbox', getHref: () => '/outbox' },
 } as const;
 

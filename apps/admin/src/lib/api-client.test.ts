@@ -187,3 +187,102 @@ describe('the API client', () => {
     expect((seen[1]?.headers as Record<string, string>)['content-type']).toBe('application/json');
   });
 });
+
+interface FakeUpload {
+  method: string;
+  url: string;
+  headers: Record<string, string>;
+  body: unknown;
+}
+
+/** Stands in for the browser's XMLHttpRequest: reports progress in two steps, then answers. */
+function fakeXhr(...answers: { status: number; body?: unknown }[]) {
+  const sent: FakeUpload[] = [];
+  class FakeRequest {
+    status = 0;
+    responseText = '';
+    upload: { onprogress: ((event: { lengthComputable: boolean; loaded: number; total: number }) => void) | null } = {
+      onprogress: null,
+    };
+    onload: (() => void) | null = null;
+    onerror: (() => void) | null = null;
+    onabort: (() => void) | null = null;
+    private current: FakeUpload = { method: '', url: '', headers: {}, body: undefined };
+
+    open(method: string, url: string) {
+      this.current = { method, url, headers: {}, body: undefined };
+    }
+    setRequestHeader(name: string, value: string) {
+      this.current.headers[name] = value;
+    }
+    abort() {
+      this.onabort?.();
+    }
+    send(body: unknown) {
+      this.current.body = body;
+      sent.push(this.current);
+      const answer = answers.shift();
+      if (!answer) {
+        this.onerror?.();
+        return;
+      }
+      this.upload.onprogress?.({ lengthComputable: true, loaded: 50, total: 100 });
+      this.upload.onprogress?.({ lengthComputable: true, loaded: 100, total: 100 });
+      this.status = answer.status;
+      this.responseText = answer.body === undefined ? '' : JSON.stringify(answer.body);
+      this.onload?.();
+    }
+  }
+  return { xhr: () => new FakeRequest() as unknown as XMLHttpRequest, sent };
+}
+
+describe('uploading a file', () => {
+  it('sends the form with the CSRF token and reports how much has gone out', async () => {
+    const server = fakeFetch(json(200, { token: 'tok-u' }));
+    const device = fakeXhr({ status: 204 });
+    const client = createApiClient({ fetch: server.fetch, xhr: device.xhr });
+    const form = new FormData();
+    form.append('photo', new Blob(['x'], { type: 'image/png' }), 'me.png');
+    const progress: number[] = [];
+
+    await expect(client.upload('/members/m1/photo', { method: 'PUT', body: form, onProgress: (f) => progress.push(f) })).resolves.toBeUndefined();
+
+    expect(device.sent).toEqual([
+      { method: 'PUT', url: '/api/members/m1/photo', headers: expect.objectContaining({ 'x-csrf-token': 'tok-u' }), body: form },
+    ]);
+    expect(progress).toEqual([0.5, 1]);
+  });
+
+  it('turns a refused file into the same error as any other call, code and all', async () => {
+    const server = fakeFetch(json(200, { token: 't' }));
+    const device = fakeXhr({ status: 413, body: { type: 'about:blank', title: 'Too large', status: 413, code: 'too_large' } });
+    const client = createApiClient({ fetch: server.fetch, xhr: device.xhr });
+
+    await expect(client.upload('/members/m1/photo', { body: new FormData() })).rejects.toMatchObject({ status: 413, code: 'too_large' });
+  });
+
+  it('checks the answer against the contract', async () => {
+    const server = fakeFetch(json(200, { token: 't' }));
+    const device = fakeXhr({ status: 201, body: { ok: true } });
+    const client = createApiClient({ fetch: server.fetch, xhr: device.xhr });
+
+    await expect(client.upload('/x', { body: new FormData(), schema: z.object({ ok: z.boolean() }) })).resolves.toEqual({ ok: true });
+  });
+
+  it('tries once more with a fresh token when the old one is refused', async () => {
+    const server = fakeFetch(json(200, { token: 'old' }), json(200, { token: 'new' }));
+    const device = fakeXhr({ status: 403, body: { type: 't', title: 't', status: 403, code: 'csrf_invalid' } }, { status: 204 });
+    const client = createApiClient({ fetch: server.fetch, xhr: device.xhr });
+
+    await client.upload('/x', { body: new FormData() });
+
+    expect(device.sent.map((upload) => upload.headers['x-csrf-token'])).toEqual(['old', 'new']);
+  });
+
+  it('turns a dropped connection into a network error', async () => {
+    const server = fakeFetch(json(200, { token: 't' }));
+    const client = createApiClient({ fetch: server.fetch, xhr: fakeXhr().xhr });
+
+    await expect(client.upload('/x', { body: new FormData() })).rejects.toMatchObject({ code: 'network_error' });
+  });
+});

@@ -113,11 +113,12 @@ export interface RequestOptions<S extends z.ZodType | undefined> {
 
 export interface ApiClientOptions {
   fetch?: typeof fetch;
+  /** Uploads go through XMLHttpRequest, the one browser API that reports how much has been sent. */
+  xhr?: () => XMLHttpRequest;
   baseUrl?: string;
 }
 
-async function readBody(response: Response): Promise<unknown> {
-  const text = await response.text().catch(() => '');
+function parseText(text: string): unknown {
   if (!text) return undefined;
   try {
     return JSON.parse(text);
@@ -126,8 +127,27 @@ async function readBody(response: Response): Promise<unknown> {
   }
 }
 
+async function readBody(response: Response): Promise<unknown> {
+  return parseText(await response.text().catch(() => ''));
+}
+
+export interface UploadOptions<S extends z.ZodType | undefined> {
+  method?: 'POST' | 'PUT';
+  body: FormData;
+  schema?: S;
+  /** Called as the file goes out, with the share sent so far from 0 to 1. */
+  onProgress?: (fraction: number) => void;
+  signal?: AbortSignal;
+}
+
+interface RawAnswer {
+  status: number;
+  body: unknown;
+}
+
 export function createApiClient(options: ApiClientOptions = {}) {
   const fetchImpl = options.fetch ?? ((input, init) => globalThis.fetch(input, init));
+  const createXhr = options.xhr ?? (() => new XMLHttpRequest());
   const baseUrl = options.baseUrl ?? API_BASE;
   let csrfToken: Promise<string> | undefined;
   let unauthorizedHandler: ((error: ApiError) => void) | undefined;
@@ -176,6 +196,33 @@ export function createApiClient(options: ApiClientOptions = {}) {
     );
   }
 
+  /**
+   * Turns an answer into the call's result. A stale CSRF token (the web session behind it
+   * ended: sign-out, expiry) earns one more try with a fresh token.
+   */
+  async function settle<S extends z.ZodType | undefined>(
+    answer: RawAnswer,
+    schema: S | undefined,
+    csrf: string | undefined,
+    isRetry: boolean,
+    retry: () => Promise<Result<S>>,
+  ): Promise<Result<S>> {
+    if (answer.status < 200 || answer.status > 299) {
+      const error = parseProblem(answer.status, answer.body);
+      if (error.status === 403 && error.code === 'csrf_invalid' && csrf && !isRetry) {
+        csrfToken = undefined;
+        return retry();
+      }
+      if (error.status === 401) unauthorizedHandler?.(error);
+      throw error;
+    }
+
+    if (!schema) return undefined as Result<S>;
+    const parsed = schema.safeParse(answer.body);
+    if (!parsed.success) throw invalidAnswer(answer.status, parsed.error);
+    return parsed.data as Result<S>;
+  }
+
   async function request<S extends z.ZodType | undefined>(
     method: Method,
     path: string,
@@ -185,22 +232,30 @@ export function createApiClient(options: ApiClientOptions = {}) {
     const csrf = method === 'GET' ? undefined : await currentCsrfToken();
     const response = await send(method, path, init, csrf);
     const body = await readBody(response);
+    return settle({ status: response.status, body }, init.schema, csrf, isRetry, () => request(method, path, init, true));
+  }
 
-    if (!response.ok) {
-      const error = parseProblem(response.status, body);
-      if (error.status === 403 && error.code === 'csrf_invalid' && csrf && !isRetry) {
-        // The web session behind the token ended (sign-out, expiry): one fresh token, one more try.
-        csrfToken = undefined;
-        return request(method, path, init, true);
-      }
-      if (error.status === 401) unauthorizedHandler?.(error);
-      throw error;
-    }
+  function sendForm(path: string, init: UploadOptions<z.ZodType | undefined>, csrf: string): Promise<RawAnswer> {
+    return new Promise((resolve, reject) => {
+      const xhr = createXhr();
+      xhr.open(init.method ?? 'POST', `${baseUrl}${path}`);
+      xhr.setRequestHeader('accept', 'application/json, application/problem+json');
+      xhr.setRequestHeader('x-csrf-token', csrf);
+      xhr.upload.onprogress = (event) => {
+        if (event.lengthComputable && event.total > 0) init.onProgress?.(event.loaded / event.total);
+      };
+      xhr.onload = () => resolve({ status: xhr.status, body: parseText(xhr.responseText) });
+      xhr.onerror = () => reject(networkError());
+      xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
+      init.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+      xhr.send(init.body);
+    });
+  }
 
-    if (!init.schema) return undefined as Result<S>;
-    const parsed = init.schema.safeParse(body);
-    if (!parsed.success) throw invalidAnswer(response.status, parsed.error);
-    return parsed.data as Result<S>;
+  async function upload<S extends z.ZodType | undefined>(path: string, init: UploadOptions<S>, isRetry = false): Promise<Result<S>> {
+    const csrf = await currentCsrfToken();
+    const answer = await sendForm(path, init, csrf);
+    return settle(answer, init.schema, csrf, isRetry, () => upload(path, init, true));
   }
 
   return {
@@ -214,6 +269,8 @@ export function createApiClient(options: ApiClientOptions = {}) {
       request('PATCH', path, init),
     delete: <S extends z.ZodType | undefined = undefined>(path: string, init: RequestOptions<S> = {}) =>
       request('DELETE', path, init),
+    /** Sends a multipart form (files) and reports progress; errors arrive like those of any other call. */
+    upload: <S extends z.ZodType | undefined = undefined>(path: string, init: UploadOptions<S>) => upload(path, init),
     /** The one place that decides what a 401 means for the app: the person is no longer signed in. */
     onUnauthorized(handler: (error: ApiError) => void) {
       unauthorizedHandler = handler;

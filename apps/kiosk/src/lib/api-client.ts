@@ -1,16 +1,26 @@
-import { problemSchema, type Problem } from '@chuckkey/core';
+import { csrfResponseSchema, problemSchema, type Problem } from '@chuckkey/core';
 import type { z } from 'zod';
 
+/** Every failed call ends as one of these; status 0 means the server could not be reached. */
 export class ApiError extends Error {
   readonly status: number;
   readonly problem: Problem | null;
 
-  constructor(status: number, problem: Problem | null) {
-    super(problem?.detail ?? problem?.title ?? `The server answered ${status}.`);
+  constructor(status: number, problem: Problem | null, message?: string) {
+    super(message ?? problem?.detail ?? problem?.title ?? `The server answered ${status}.`);
     this.name = 'ApiError';
     this.status = status;
     this.problem = problem;
   }
+
+  get code(): string {
+    if (this.problem) return this.problem.code;
+    return this.status === 0 ? 'network_error' : `http_${this.status}`;
+  }
+}
+
+export function isApiError(error: unknown, status?: number): error is ApiError {
+  return error instanceof ApiError && (status === undefined || error.status === status);
 }
 
 async function readProblem(response: Response): Promise<Problem | null> {
@@ -22,16 +32,76 @@ async function readProblem(response: Response): Promise<Problem | null> {
   }
 }
 
+type Result<S> = S extends z.ZodType ? z.output<S> : void;
+
 /**
- * Every answer is checked against core's schema, so a server and a kiosk of different
- * versions fail loudly on the screen's error state instead of showing half a page.
+ * One client per page. A kiosk has no signed-in person, but its web session still carries the
+ * CSRF token (GET /api/auth/csrf works without signing in), sent in `x-csrf-token` on every POST.
  */
-export async function apiGet<T extends z.ZodType>(path: string, schema: T, signal?: AbortSignal): Promise<z.infer<T>> {
-  const response = await fetch(`/api${path}`, {
-    credentials: 'same-origin',
-    headers: { accept: 'application/json' },
-    signal,
-  });
-  if (!response.ok) throw new ApiError(response.status, await readProblem(response));
-  return schema.parse(await response.json());
+export function createApiClient(fetchImpl: typeof fetch = (input, init) => globalThis.fetch(input, init)) {
+  let csrfToken: Promise<string> | undefined;
+
+  async function send(path: string, init: RequestInit): Promise<Response> {
+    try {
+      return await fetchImpl(`/api${path}`, { credentials: 'same-origin', ...init });
+    } catch (cause) {
+      if (init.signal?.aborted) throw cause;
+      throw new ApiError(0, null, 'The shop’s server does not answer.');
+    }
+  }
+
+  async function fetchCsrfToken(): Promise<string> {
+    const response = await send('/auth/csrf', { headers: { accept: 'application/json' } });
+    if (!response.ok) throw new ApiError(response.status, await readProblem(response));
+    return csrfResponseSchema.parse(await response.json()).token;
+  }
+
+  // Fetched once; a failed fetch is forgotten so that the next call tries again.
+  function currentCsrfToken(): Promise<string> {
+    csrfToken ??= fetchCsrfToken().catch((error: unknown) => {
+      csrfToken = undefined;
+      throw error;
+    });
+    return csrfToken;
+  }
+
+  /** Answers are checked against core's schema, so a server of another version fails loudly. */
+  async function get<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.output<S>> {
+    const response = await send(path, { headers: { accept: 'application/json' }, signal });
+    if (!response.ok) throw new ApiError(response.status, await readProblem(response));
+    return schema.parse(await response.json());
+  }
+
+  async function post<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S, isRetry = false): Promise<Result<S>> {
+    const token = await currentCsrfToken();
+    const response = await send(path, {
+      method: 'POST',
+      headers: { accept: 'application/json', 'content-type': 'application/json', 'x-csrf-token': token },
+      body: JSON.stringify(body ?? {}),
+    });
+    if (!response.ok) {
+      const error = new ApiError(response.status, await readProblem(response));
+      // The web session behind the token ended (it lapses after hours without requests): one
+      // fresh token, one more try.
+      if (error.status === 403 && error.code === 'csrf_invalid' && !isRetry) {
+        csrfToken = undefined;
+        return post(path, body, schema, true);
+      }
+      throw error;
+    }
+    if (!schema) return undefined as Result<S>;
+    return schema.parse(await response.json()) as Result<S>;
+  }
+
+  return { get, post };
+}
+
+const client = createApiClient();
+
+export function apiGet<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.output<S>> {
+  return client.get(path, schema, signal);
+}
+
+export function apiPost<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S): Promise<Result<S>> {
+  return client.post(path, body, schema);
 }

@@ -35,3 +35,7 @@ export const auditQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1).max(100).default(50),
   format: z.enum(['json', 'csv']).default('json'),
 });
+export type AuditQuery = z.infer<typeof auditQuerySchema>;
+
+export const auditPageSchema = z.object({ items: z.array(auditEntrySchema), total: z.number().int() });
+export type AuditPage = z.infer<typeof auditPageSchema>;

@@ -20,12 +20,16 @@ export const pinSchema = z.object({
 });
 export type PinInput = z.infer<typeof pinSchema>;
 
+export const badgeSheetPapers = ['letter', 'a4'] as const;
 export const badgeSheetQuerySchema = z.object({
   memberIds: z
     .union([z.string(), z.array(z.string())])
     .transform((v) => (Array.isArray(v) ? v : v.split(',')).map((s) => s.trim()).filter(Boolean))
     .pipe(z.array(z.uuid({ error: 'Not a valid member id.' })).min(1, { error: 'Choose at least one member.' }).max(200)),
+  /** The sheet's paper: US Letter by default, or ISO 216 A4. */
+  paper: z.enum(badgeSheetPapers).default('letter'),
 });
+export type BadgeSheetQuery = z.infer<typeof badgeSheetQuerySchema>;
 
 /** ISO/IEC 7810 ID-1 card: 85.60 × 53.98 mm; corner radius 3.18 mm (ISO/IEC 7813). */
 export const ID1_MM = { width: 85.6, height: 53.98, cornerRadius: 3.18 } as const;

@@ -29,6 +29,7 @@ export const permissions = [
   'create:sign-off:any',
   'revoke:sign-off:any',
   'read:sign-off:any',
+  'read:photo:any',
   'read:member:any',
   'update:member:any',
   'create:invitation:any',
@@ -36,6 +37,7 @@ export const permissions = [
   'read:outbox:any',
   'manage:machine:any',
   'manage:training:any',
+  'report:sign-off:any',
   'manage:badge:any',
   'manage:waiver:any',
   'manage:station:any',
@@ -55,13 +57,17 @@ const memberPermissions: readonly Permission[] = [
   'accept:waiver:own',
 ];
 
-/** Instructors sign members off, so they may find members and read their sign-offs. */
+/**
+ * Instructors sign members off, so they may find members and read their sign-offs, and see
+ * their photos to be sure who stands in front of them.
+ */
 const instructorPermissions: readonly Permission[] = [
   ...memberPermissions,
   'search:member:any',
   'create:sign-off:any',
   'revoke:sign-off:any',
   'read:sign-off:any',
+  'read:photo:any',
 ];
 
 export const permissionsByRole: Record<Role, readonly Permission[]> = {

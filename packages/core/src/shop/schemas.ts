@@ -38,7 +38,6 @@ export const machineSchema = z.object({
   meterHours: z.number(),
 });
 export type Machine = z.infer<typeof machineSchema>;
-export const machineListSchema = z.object({ items: z.array(machineSchema) });
 
 export const outboxMessageSchema = z.object({
   id: z.uuid(),

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { badgeCodeSchema } from '../badges/schemas';
-import { signOffLevelSchema } from '../trainings/schemas';
+import { roleSchema } from '../people/roles';
+import { signOffLevelSchema, trainingSchema } from '../trainings/schemas';
 
 export const stationKinds = ['machine', 'crib', 'board'] as const;
 
@@ -65,3 +66,33 @@ export const stationSignOffSchema = z.object({
   note: z.string().trim().max(1000).default(''),
 });
 export type StationSignOff = z.infer<typeof stationSignOffSchema>;
+
+export const stationListSchema = z.array(stationSchema);
+
+/** The answer to creating a station or asking for a new code: the code is shown this once. */
+export const stationWithCodeSchema = stationSchema.extend({ pairingCode: z.string() });
+export type StationWithCode = z.infer<typeof stationWithCodeSchema>;
+
+/** The name of the device cookie that a paired station holds instead of a person's session. */
+export const STATION_COOKIE = 'chuckkey.station';
+
+export const stationMemberLookupSchema = z.object({ badge: badgeCodeSchema });
+
+/** A badge scanned at idle: the role lets the station open the instructor menu. */
+export const stationMemberLookupResultSchema = z.union([
+  z.object({
+    member: z.object({ id: z.uuid(), firstName: z.string(), role: roleSchema }),
+  }),
+  z.object({
+    member: z.null(),
+    reason: z.enum(['unknown_badge', 'member_inactive']),
+  }),
+]);
+export type StationMemberLookupResult = z.infer<typeof stationMemberLookupResultSchema>;
+
+export const stationInstructorResultSchema = z.object({
+  instructor: z.object({ id: z.uuid(), firstName: z.string() }),
+  /** The active trainings the instructor can sign off, this station's machine's first. */
+  trainings: z.array(trainingSchema),
+});
+export type StationInstructorResult = z.infer<typeof stationInstructorResultSchema>;

@@ -136,3 +136,24 @@ export type MachineFormValues = z.input<typeof machineInputSchema>;
 
 export const areaSchema = z.object({ id: z.uuid(), name: z.string() });
 export type Area = z.infer<typeof areaSchema>;
+
+/** GET /api/machines: every machine with what a member needs to start on it. */
+export const machineListSchema = z.array(machineDetailSchema);
+
+export const areaListSchema = z.array(areaSchema);
+export const trainingListSchema = z.array(trainingSchema);
+export const signOffListSchema = z.array(signOffSchema);
+
+/** GET /api/teach/members: the people an instructor may look up to sign off. */
+export const TEACH_SEARCH_LIMIT = 20;
+export const teachMemberQuerySchema = z.object({
+  search: z.string().trim().max(100, { error: 'Use at most 100 characters.' }).default(''),
+});
+export const teachMemberSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  email: z.string(),
+  active: z.boolean(),
+});
+export type TeachMember = z.infer<typeof teachMemberSchema>;
+export const teachMemberListSchema = z.array(teachMemberSchema);

@@ -16,8 +16,11 @@ interface NavItem {
 // Only pages that exist are listed; the order follows the shop's own: the floor first, admin work last.
 const navItems: NavItem[] = [
   { label: 'Shop floor', to: paths.home.getHref(), end: true },
+  { label: 'My record', to: paths.myRecord.getHref() },
   { label: 'Profile', to: paths.profile.getHref() },
+  { label: 'Teach', to: paths.teach.getHref(), permission: 'create:sign-off:any' },
   { label: 'People', to: paths.people.getHref(), permission: 'read:member:any' },
+  { label: 'Setup', to: paths.setup.getHref(), permission: 'manage:machine:any' },
   { label: 'Outbox', to: paths.outbox.getHref(), permission: 'read:outbox:any' },
 ];
 

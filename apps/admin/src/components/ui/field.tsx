@@ -43,13 +43,17 @@ export function FieldShell({ ids, label, hint, error, className, children }: Fie
         </p>
       )}
       {children}
-      {error && (
-        <p id={ids.error} className="flex items-start gap-1.5 text-sm font-bold text-danger">
-          <ErrorIcon className="mt-px size-4 shrink-0" />
-          <span>{error}</span>
-        </p>
-      )}
+      {error && <FieldError id={ids.error}>{error}</FieldError>}
     </div>
+  );
+}
+
+export function FieldError({ id, children }: { id: string; children: ReactNode }) {
+  return (
+    <p id={id} className="flex items-start gap-1.5 text-sm font-bold text-danger">
+      <ErrorIcon className="mt-px size-4 shrink-0" />
+      <span>{children}</span>
+    </p>
   );
 }
 

@@ -74,6 +74,11 @@ export function membersRepository(db: Db) {
       return table().first(columns).where({ id });
     },
 
+    /** Reads the row and locks it until the transaction ends, so a change sees what it replaces. */
+    async findByIdForUpdate(id: string): Promise<MemberRecord | undefined> {
+      return table().first(columns).where({ id }).forUpdate();
+    },
+
     async findByEmail(email: string): Promise<MemberRecord | undefined> {
       return table().first(columns).where({ email });
     },

@@ -2,6 +2,7 @@ import type { Member, MemberListQuery, MemberPage, MemberUpdate } from '@chuckke
 import { toCsv } from '@chuckkey/core';
 import { conflict, notFound } from '../../lib/errors';
 import type { Deps } from '../../lib/deps';
+import { auditLog } from '../audit/audit.repository';
 import { membersRepository, toMember } from './members.repository';
 
 const CSV_EXPORT_LIMIT = 100_000;
@@ -31,9 +32,28 @@ export function membersService({ db }: Deps) {
       if (actor.id === id && ((changes.role && changes.role !== actor.role) || changes.active === false)) {
         throw conflict('cannot_change_self', 'You cannot change your own role or deactivate yourself. Ask another admin.');
       }
-      const updated = await members.update(id, changes);
-      if (!updated) throw notFound('member_not_found', 'There is no member with that id.');
-      if (changes.active === false) await members.endWebSessions(id);
+      // The change and its audit entries commit together: no role change goes unrecorded.
+      const updated = await db.transaction(async (trx) => {
+        const repository = membersRepository(trx);
+        const before = await repository.findByIdForUpdate(id);
+        if (!before) throw notFound('member_not_found', 'There is no member with that id.');
+        const after = await repository.update(id, changes);
+        if (!after) throw notFound('member_not_found', 'There is no member with that id.');
+        const audit = auditLog(trx);
+        const entry = { actorId: actor.id, entity: 'member', entityId: id, memberId: id };
+        if (before.role !== after.role) {
+          await audit.record({ ...entry, action: 'member.role_changed', details: { before: { role: before.role }, after: { role: after.role } } });
+        }
+        if (before.active !== after.active) {
+          await audit.record({
+            ...entry,
+            action: after.active ? 'member.reactivated' : 'member.deactivated',
+            details: { before: { active: before.active }, after: { active: after.active } },
+          });
+        }
+        if (changes.active === false) await repository.endWebSessions(id);
+        return after;
+      });
       return toMember(updated);
     },
   };

@@ -1,4 +1,4 @@
-import type { Machine, Shop } from '@chuckkey/core';
+import type { Shop } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 
 export function shopRepository(db: Db) {
@@ -8,20 +8,6 @@ export function shopRepository(db: Db) {
       // A database without its shop row has not been set up: a bug in set-up, not user input.
       if (!row) throw new Error('the shop row is missing: run the database set-up');
       return row;
-    },
-
-    async listMachines(): Promise<Machine[]> {
-      return db('machines')
-        .join('areas', 'areas.id', 'machines.area_id')
-        .select({
-          id: 'machines.id',
-          name: 'machines.name',
-          category: 'machines.category',
-          area: 'areas.name',
-          reservable: 'machines.reservable',
-          meterHours: 'machines.meter_hours',
-        })
-        .orderBy([{ column: 'areas.sort_order' }, { column: 'areas.name' }, { column: 'machines.name' }]);
     },
   };
 }

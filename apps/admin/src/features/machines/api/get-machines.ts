@@ -1,11 +1,10 @@
-import { machineListSchema, type Machine } from '@chuckkey/core';
+import { machineListSchema, type MachineDetail } from '@chuckkey/core';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { machineKeys } from './machine-keys';
 
-export async function getMachines(signal?: AbortSignal): Promise<Machine[]> {
-  const { items } = await api.get('/machines', { schema: machineListSchema, signal });
-  return items;
+export function getMachines(signal?: AbortSignal): Promise<MachineDetail[]> {
+  return api.get('/machines', { schema: machineListSchema, signal });
 }
 
 export function machinesQueryOptions() {

@@ -2,4 +2,6 @@ export const machineKeys = {
   all: ['machines'] as const,
   lists: () => [...machineKeys.all, 'list'] as const,
   list: () => [...machineKeys.lists()] as const,
+  details: () => [...machineKeys.all, 'detail'] as const,
+  detail: (id: string) => [...machineKeys.details(), id] as const,
 };

@@ -1,3 +1,4 @@
+import type { MachineDetail } from '@chuckkey/core';
 import { useId } from 'react';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { QueryError } from '../../../components/ui/query-error';
@@ -6,7 +7,7 @@ import { useMachines } from '../api/get-machines';
 import { groupByArea, type AreaGroup } from '../utils/group-by-area';
 import { Nameplate } from './nameplate';
 
-function AreaSection({ group }: { group: AreaGroup }) {
+function AreaSection({ group }: { group: AreaGroup<MachineDetail> }) {
   const headingId = useId();
   const count = group.machines.length;
   return (

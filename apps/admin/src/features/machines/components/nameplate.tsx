@@ -1,4 +1,4 @@
-import { machineCategoryLabels, type Machine } from '@chuckkey/core';
+import { machineCategoryLabels, type MachineDetail } from '@chuckkey/core';
 import { useId } from 'react';
 import { formatHours } from '../../../lib/format';
 
@@ -7,7 +7,7 @@ function Rivet() {
 }
 
 /** The machine as its riveted maker's plate: name stamped in capitals on a band, the facts below. */
-export function Nameplate({ machine }: { machine: Machine }) {
+export function Nameplate({ machine }: { machine: MachineDetail }) {
   const nameId = useId();
   return (
     <article aria-labelledby={nameId} className="flex flex-col overflow-hidden rounded-md border-2 border-neutral-800 bg-white">
@@ -23,6 +23,22 @@ export function Nameplate({ machine }: { machine: Machine }) {
           <dt className="sr-only">Category</dt>
           <dd className="text-lg font-bold text-neutral-900">{machineCategoryLabels[machine.category]}</dd>
         </div>
+        <div className="flex flex-col gap-0.5 border-t border-neutral-200 pt-2">
+          <dt className="text-neutral-700">Trainings needed</dt>
+          <dd className="text-neutral-900">
+            {machine.trainings.length > 0 ? (
+              <ul className="flex flex-col">
+                {machine.trainings.map((training) => (
+                  <li key={training.id} className="font-bold">
+                    {training.name}
+                  </li>
+                ))}
+              </ul>
+            ) : (
+              'None'
+            )}
+          </dd>
+        </div>
         <div className="flex items-baseline justify-between gap-3 border-t border-neutral-200 pt-2">
           <dt className="text-neutral-700">Meter</dt>
           <dd className="font-bold text-neutral-900 tabular-nums">{formatHours(machine.meterHours)}</dd>
@@ -31,6 +47,12 @@ export function Nameplate({ machine }: { machine: Machine }) {
           <dt className="text-neutral-700">Booking</dt>
           <dd className="text-neutral-900">{machine.reservable ? 'Can be reserved' : 'Walk up only'}</dd>
         </div>
+        {machine.requiresPin && (
+          <div className="flex items-baseline justify-between gap-3">
+            <dt className="text-neutral-700">At the station</dt>
+            <dd className="text-neutral-900">Badge and PIN</dd>
+          </div>
+        )}
       </dl>
     </article>
   );

@@ -1,16 +1,14 @@
-import type { Machine } from '@chuckkey/core';
-
-export interface AreaGroup {
+export interface AreaGroup<M> {
   area: string;
-  machines: Machine[];
+  machines: M[];
 }
 
 /**
  * Keeps the areas in the order the server lists them (the shop's own order of its rooms) and
  * sorts machines within an area by name, numbers read as numbers so that Lathe 2 precedes Lathe 10.
  */
-export function groupByArea(machines: readonly Machine[]): AreaGroup[] {
-  const groups = new Map<string, Machine[]>();
+export function groupByArea<M extends { area: string; name: string }>(machines: readonly M[]): AreaGroup<M>[] {
+  const groups = new Map<string, M[]>();
   for (const machine of machines) {
     const group = groups.get(machine.area);
     if (group) group.push(machine);

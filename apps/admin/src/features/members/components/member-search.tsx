@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import { TextField } from '../../../components/ui/text-field';
-import { useDebouncedValue } from '../hooks/use-debounced-value';
+import { useDebouncedValue } from '../../../hooks/use-debounced-value';
 
 interface MemberSearchProps {
   value: string;

@@ -14,14 +14,16 @@ import { memberSortChoices, membersCsvHref, nextSort, readSortChoice, sortChoice
 import { MemberCards } from './member-cards';
 import { MemberChangeDialog, type MemberChange } from './member-change-dialog';
 import { MemberSearch } from './member-search';
+import type { MemberExtras } from './member-extras';
 import { MembersTable } from './members-table';
 
 interface MembersPanelProps {
   currentUserId: string;
   timeZone: string | undefined;
+  extras?: MemberExtras;
 }
 
-export function MembersPanel({ currentUserId, timeZone }: MembersPanelProps) {
+export function MembersPanel({ currentUserId, timeZone, extras = {} }: MembersPanelProps) {
   const [filters, update] = useMemberFilters();
   const members = useMembers(filters);
   const [change, setChange] = useState<MemberChange | null>(null);
@@ -108,9 +110,16 @@ export function MembersPanel({ currentUserId, timeZone }: MembersPanelProps) {
               timeZone={timeZone}
               onSort={(sort) => update(nextSort(filters, sort))}
               onChange={setChange}
+              extras={extras}
             />
           ) : (
-            <MemberCards members={members.data.items} currentUserId={currentUserId} timeZone={timeZone} onChange={setChange} />
+            <MemberCards
+              members={members.data.items}
+              currentUserId={currentUserId}
+              timeZone={timeZone}
+              onChange={setChange}
+              extras={extras}
+            />
           )}
         </div>
       )}

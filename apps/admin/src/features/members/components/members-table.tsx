@@ -4,6 +4,8 @@ import { formatDate } from '../../../lib/format';
 import { memberColumns, type MemberSort } from '../utils/member-filters';
 import { ActiveToggle, RoleSelect, StatusBadge } from './member-actions';
 import type { MemberChange } from './member-change-dialog';
+import type { MemberExtras } from './member-extras';
+import { MemberNameLink } from './member-name-link';
 
 interface MembersTableProps {
   members: Member[];
@@ -12,13 +14,32 @@ interface MembersTableProps {
   timeZone: string | undefined;
   onSort: (sort: MemberSort) => void;
   onChange: (change: MemberChange) => void;
+  extras?: MemberExtras;
 }
 
-export function MembersTable({ members, filters, currentUserId, timeZone, onSort, onChange }: MembersTableProps) {
+const checkboxClasses = 'size-5 cursor-pointer accent-brand';
+
+export function MembersTable({ members, filters, currentUserId, timeZone, onSort, onChange, extras = {} }: MembersTableProps) {
+  const { selected, onSelect, rowActions } = extras;
+  const selectable = Boolean(selected && onSelect);
+  const allSelected = selectable && members.every((member) => selected?.has(member.id));
   return (
     <Table caption="Members of the shop">
       <THead>
         <Tr>
+          {selectable && (
+            <Th className="w-12">
+              <label className="flex size-11 cursor-pointer items-center justify-center">
+                <input
+                  type="checkbox"
+                  className={checkboxClasses}
+                  checked={allSelected}
+                  onChange={(event) => onSelect?.(members, event.target.checked)}
+                />
+                <span className="sr-only">Choose everyone on this page for the badge sheet</span>
+              </label>
+            </Th>
+          )}
           {memberColumns.map((column) => (
             <SortableTh
               key={column.sort}
@@ -38,9 +59,22 @@ export function MembersTable({ members, filters, currentUserId, timeZone, onSort
           const isSelf = member.id === currentUserId;
           return (
             <Tr key={member.id} className={member.active ? undefined : 'bg-neutral-50'}>
-              <Td className="font-bold">
-                {member.name}
-                {isSelf && <span className="font-normal text-neutral-700"> (you)</span>}
+              {selectable && (
+                <Td className="px-2 py-1">
+                  <label className="flex size-11 cursor-pointer items-center justify-center">
+                    <input
+                      type="checkbox"
+                      className={checkboxClasses}
+                      checked={selected?.has(member.id) ?? false}
+                      onChange={(event) => onSelect?.([member], event.target.checked)}
+                    />
+                    <span className="sr-only">Choose {member.name} for the badge sheet</span>
+                  </label>
+                </Td>
+              )}
+              <Td>
+                <MemberNameLink member={member} />
+                {isSelf && <span className="text-neutral-700"> (you)</span>}
               </Td>
               <Td>{member.email}</Td>
               <Td>{isSelf ? roleLabels[member.role] : <RoleSelect member={member} onChange={onChange} />}</Td>
@@ -48,7 +82,12 @@ export function MembersTable({ members, filters, currentUserId, timeZone, onSort
               <Td>
                 <StatusBadge active={member.active} />
               </Td>
-              <Td className="text-right">{!isSelf && <ActiveToggle member={member} onChange={onChange} />}</Td>
+              <Td>
+                <div className="flex flex-wrap justify-end gap-2">
+                  {rowActions?.(member)}
+                  {!isSelf && <ActiveToggle member={member} onChange={onChange} />}
+                </div>
+              </Td>
             </Tr>
           );
         })}

@@ -1,0 +1,123 @@
+import { auditActions } from '@chuckkey/core';
+import { Link } from 'react-router-dom';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { DownloadIcon } from '../../../components/ui/icons';
+import { Pagination } from '../../../components/ui/pagination';
+import { QueryError } from '../../../components/ui/query-error';
+import { SelectField } from '../../../components/ui/select-field';
+import { Spinner } from '../../../components/ui/spinner';
+import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
+import { paths } from '../../../config/paths';
+import { formatDateTime } from '../../../lib/format';
+import { useAuditLog } from '../api/get-audit-log';
+import { useAuditFilters } from '../hooks/use-audit-filters';
+import { AUDIT_PAGE_SIZE, actionLabel, auditActionLabels, auditCsvHref, detailLines, isAuditAction } from '../utils/audit-filters';
+
+export function AuditLogView({ timeZone }: { timeZone: string | undefined }) {
+  const [filters, update] = useAuditFilters();
+  const log = useAuditLog(filters);
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div role="search" aria-label="Filter the audit log" className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
+        <SelectField
+          label="Action"
+          value={filters.action ?? ''}
+          onChange={(event) => {
+            const value = event.target.value;
+            update({ action: isAuditAction(value) ? value : undefined });
+          }}
+          containerClassName="flex flex-col gap-1.5 sm:w-72"
+        >
+          <option value="">Every action</option>
+          {auditActions.map((action) => (
+            <option key={action} value={action}>
+              {auditActionLabels[action]}
+            </option>
+          ))}
+        </SelectField>
+        <a href={auditCsvHref(filters)} download className={buttonClasses('secondary')}>
+          <DownloadIcon />
+          Export CSV
+        </a>
+      </div>
+
+      {log.isPending ? (
+        <Spinner label="Loading the audit log…" />
+      ) : log.isError ? (
+        <QueryError error={log.error} what="the audit log" onRetry={() => void log.refetch()} retrying={log.isFetching} />
+      ) : log.data.items.length === 0 ? (
+        filters.page > 1 ? (
+          <EmptyState
+            title="This page is empty"
+            action={
+              <Button variant="secondary" onClick={() => update({ page: 1 })}>
+                Go to the first page
+              </Button>
+            }
+          />
+        ) : (
+          <EmptyState title={filters.action ? `Nothing recorded for “${auditActionLabels[filters.action]}”` : 'Nothing recorded yet'}>
+            Sign-offs, revocations, role changes, badges, waivers and stations are recorded here as they happen.
+          </EmptyState>
+        )
+      ) : (
+        <div className={log.isPlaceholderData ? 'opacity-60 transition-opacity' : undefined} aria-busy={log.isPlaceholderData}>
+          <Table caption="Audit log, newest first">
+            <THead>
+              <Tr>
+                <Th>When</Th>
+                <Th>Action</Th>
+                <Th>By</Th>
+                <Th>Member</Th>
+                <Th>Details</Th>
+              </Tr>
+            </THead>
+            <TBody>
+              {log.data.items.map((entry) => (
+                <Tr key={entry.id} className="align-top">
+                  <Td className="whitespace-nowrap">
+                    <time dateTime={entry.at}>{formatDateTime(entry.at, timeZone)}</time>
+                  </Td>
+                  <Td className="font-bold">{actionLabel(entry.action)}</Td>
+                  <Td>{entry.actor?.name ?? 'Chuckkey'}</Td>
+                  <Td>
+                    {entry.member ? (
+                      <Link
+                        to={paths.memberRecord.getHref(entry.member.id)}
+                        state={{ name: entry.member.name }}
+                        className="text-brand underline underline-offset-4"
+                      >
+                        {entry.member.name}
+                      </Link>
+                    ) : (
+                      '—'
+                    )}
+                  </Td>
+                  <Td className="text-sm">
+                    {detailLines(entry.details).map((line, index) => (
+                      <p key={index} className="break-words">
+                        {line}
+                      </p>
+                    ))}
+                  </Td>
+                </Tr>
+              ))}
+            </TBody>
+          </Table>
+        </div>
+      )}
+
+      {log.data && log.data.total > 0 && (
+        <Pagination
+          page={filters.page}
+          pageSize={AUDIT_PAGE_SIZE}
+          total={log.data.total}
+          nouns={['entry', 'entries']}
+          onPageChange={(page) => update({ page })}
+        />
+      )}
+    </div>
+  );
+}

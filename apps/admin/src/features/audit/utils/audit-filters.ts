@@ -1,0 +1,72 @@
+import { auditActions, type AuditAction } from '@chuckkey/core';
+import { apiHref } from '../../../lib/api-client';
+
+export const AUDIT_PAGE_SIZE = 50;
+
+export interface AuditFilters {
+  action?: AuditAction;
+  page: number;
+}
+
+export const auditActionLabels: Record<AuditAction, string> = {
+  'sign_off.created': 'Sign-off given',
+  'sign_off.revoked': 'Sign-off revoked',
+  'member.role_changed': 'Role changed',
+  'member.deactivated': 'Member deactivated',
+  'member.reactivated': 'Member reactivated',
+  'badge.issued': 'Badge issued',
+  'waiver.accepted': 'Waiver accepted',
+  'waiver.scan_uploaded': 'Waiver scan uploaded',
+  'waiver.published': 'Waiver published',
+  'station.created': 'Station added',
+  'station.paired': 'Station paired',
+  'station.revoked': 'Station revoked',
+};
+
+export function isAuditAction(value: string | null): value is AuditAction {
+  return value !== null && (auditActions as readonly string[]).includes(value);
+}
+
+/** Entries can name actions added after this page was written; those show as the server words them. */
+export function actionLabel(action: string): string {
+  return isAuditAction(action) ? auditActionLabels[action] : action;
+}
+
+/** The filter and page live in the address, so a view of the log can be linked; anything mangled falls back. */
+export function readAuditFilters(params: URLSearchParams): AuditFilters {
+  const action = params.get('action');
+  const page = Number(params.get('page'));
+  return {
+    ...(isAuditAction(action) ? { action } : {}),
+    page: Number.isInteger(page) && page >= 1 ? page : 1,
+  };
+}
+
+export function auditFiltersToSearchParams(filters: AuditFilters): URLSearchParams {
+  const params = new URLSearchParams();
+  if (filters.action) params.set('action', filters.action);
+  if (filters.page > 1) params.set('page', String(filters.page));
+  return params;
+}
+
+/** The export holds every entry of the chosen action, not just the page on screen. */
+export function auditCsvHref(filters: AuditFilters): string {
+  return apiHref('/audit', { action: filters.action, format: 'csv' });
+}
+
+function words(key: string): string {
+  const spaced = key.replace(/([a-z0-9])([A-Z])/g, '$1 $2').replace(/[_-]+/g, ' ').trim().toLowerCase();
+  return spaced.charAt(0).toUpperCase() + spaced.slice(1);
+}
+
+function valueText(value: unknown): string {
+  if (value === null || value === undefined) return '—';
+  if (typeof value === 'string') return value;
+  if (typeof value === 'number' || typeof value === 'boolean') return String(value);
+  return JSON.stringify(value);
+}
+
+/** An entry's details as short lines of plain words: { fromRole: "member" } → "From role: member". */
+export function detailLines(details: Record<string, unknown>): string[] {
+  return Object.entries(details).map(([key, value]) => `${words(key)}: ${valueText(value)}`);
+}

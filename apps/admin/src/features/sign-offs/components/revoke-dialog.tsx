@@ -1,0 +1,80 @@
+import { signOffRevokeSchema, type SignOff } from '@chuckkey/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { TextAreaField } from '../../../components/ui/text-area-field';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useRevokeSignOff } from '../api/revoke-sign-off';
+
+const errorOptions = {
+  messages: {
+    already_revoked: 'Someone revoked this sign-off already. Close this and look at the record again.',
+  },
+};
+
+function RevokeForm({ signOff, onClose, onRevoked }: { signOff: SignOff; onClose: () => void; onRevoked: (signOff: SignOff) => void }) {
+  const revoke = useRevokeSignOff();
+  const [formError, setFormError] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(signOffRevokeSchema), defaultValues: { reason: '' } });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      onRevoked(await revoke.mutateAsync({ id: signOff.id, revoke: values }));
+    } catch (error) {
+      setFormError(applyServerErrors(error, setError, ['reason'], errorOptions));
+    }
+  });
+
+  return (
+    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
+      {formError && <Alert tone="error">{formError}</Alert>}
+      <TextAreaField
+        label="Reason"
+        hint="The member sees it on their record. Say what was seen and what they need to do to be signed off again."
+        rows={3}
+        error={errors.reason?.message}
+        {...register('reason')}
+      />
+      <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
+        <Button variant="secondary" onClick={onClose} disabled={revoke.isPending}>
+          Cancel
+        </Button>
+        <Button type="submit" variant="danger" pending={revoke.isPending}>
+          Revoke sign-off
+        </Button>
+      </div>
+    </form>
+  );
+}
+
+interface RevokeDialogProps {
+  signOff: SignOff | null;
+  onClose: () => void;
+  onRevoked: (signOff: SignOff) => void;
+}
+
+export function RevokeDialog({ signOff, onClose, onRevoked }: RevokeDialogProps) {
+  return (
+    <Dialog
+      open={signOff !== null}
+      title={signOff ? `Revoke ${signOff.memberName}'s sign-off for ${signOff.trainingName}?` : ''}
+      description={
+        signOff && signOff.machines.length > 0
+          ? `From now on no station clears them for ${signOff.machines.map((machine) => machine.name).join(', ')} on this sign-off. The record stays, marked revoked.`
+          : 'From now on this sign-off no longer counts. The record stays, marked revoked.'
+      }
+      onClose={onClose}
+    >
+      {signOff && <RevokeForm key={signOff.id} signOff={signOff} onClose={onClose} onRevoked={onRevoked} />}
+    </Dialog>
+  );
+}

@@ -1,0 +1,1 @@
+export { Icon, type IconName } from './icon';

@@ -1,0 +1,19 @@
+import { stationSelfSchema } from '@chuckkey/core';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiPost } from '@/lib/api-client';
+import { stationKeys } from './get-station';
+
+export function pairStation(pairingCode: string) {
+  return apiPost('/station/pair', { pairingCode }, stationSelfSchema);
+}
+
+export function usePairStation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: pairStation,
+    onSuccess: async (station) => {
+      queryClient.setQueryData(stationKeys.self(), station);
+      await queryClient.invalidateQueries({ queryKey: stationKeys.all });
+    },
+  });
+}

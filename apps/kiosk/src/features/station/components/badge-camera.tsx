@@ -1,0 +1,90 @@
+import { Html5Qrcode, Html5QrcodeSupportedFormats } from 'html5-qrcode';
+import { useEffect, useEffectEvent, useId, useRef, useState } from 'react';
+import { Icon } from '@/components/ui/icon';
+
+type CameraStatus = 'starting' | 'running' | 'unavailable';
+
+// The same badge stays in front of the camera for many frames; one read per second is enough.
+const SAME_CODE_QUIET_MS = 3_000;
+
+/**
+ * The camera preview inside the badge outline, reading QR codes with html5-qrcode. The whole
+ * frame is scanned (no qrbox), so a badge held anywhere in view is read, whatever its size.
+ */
+export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
+  const elementId = `badge-camera-${useId().replace(/[^A-Za-z0-9_-]/g, '')}`;
+  const [status, setStatus] = useState<CameraStatus>('starting');
+  // Starting and stopping a camera take time; each waits for the one before, so React's
+  // StrictMode (mount, unmount, mount) never has two scanners on the same element.
+  const queue = useRef<Promise<void>>(Promise.resolve());
+  const emit = useEffectEvent(onCode);
+
+  useEffect(() => {
+    let cancelled = false;
+    let scanner: Html5Qrcode | undefined;
+    let last = { code: '', at: 0 };
+
+    queue.current = queue.current.then(async () => {
+      if (cancelled) return;
+      if (!navigator.mediaDevices?.getUserMedia) {
+        setStatus('unavailable');
+        return;
+      }
+      const instance = new Html5Qrcode(elementId, { verbose: false, formatsToSupport: [Html5QrcodeSupportedFormats.QR_CODE] });
+      try {
+        await instance.start(
+          // The station's camera faces the person standing at it.
+          { facingMode: 'user' },
+          { fps: 10 },
+          (text) => {
+            const now = Date.now();
+            if (text === last.code && now - last.at < SAME_CODE_QUIET_MS) return;
+            last = { code: text, at: now };
+            emit(text);
+          },
+          () => undefined,
+        );
+        scanner = instance;
+        if (cancelled) return;
+        setStatus('running');
+      } catch {
+        // No camera, or the browser was not allowed to use it: the other ways still work.
+        if (!cancelled) setStatus('unavailable');
+      }
+    });
+
+    return () => {
+      cancelled = true;
+      queue.current = queue.current.then(async () => {
+        if (!scanner) return;
+        try {
+          if (scanner.isScanning) await scanner.stop();
+          scanner.clear();
+        } catch {
+          // The element may already be gone with its screen; nothing is left running either way.
+        }
+      });
+    };
+  }, [elementId]);
+
+  return (
+    <div className="relative flex h-full w-full items-center justify-center overflow-hidden rounded-xl bg-black/40">
+      <div id={elementId} className="h-full w-full [&_video]:h-full [&_video]:w-full [&_video]:object-cover" />
+      {status !== 'running' ? (
+        <p role="status" className="absolute inset-0 flex items-center justify-center gap-4 px-6 text-center text-kiosk-body">
+          {status === 'starting' ? (
+            <>
+              <Icon name="hourglass" className="size-9" />
+              <span>Starting the camera…</span>
+            </>
+          ) : (
+            <>
+              <Icon name="camera-off" className="size-9" />
+              <span>No camera here, or it is not allowed. Use a badge scanner or type the badge code.</span>
+            </>
+          )}
+        </p>
+      ) : null}
+    </div>
+  );
+}

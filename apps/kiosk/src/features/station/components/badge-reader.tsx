@@ -1,0 +1,62 @@
+import { useState, type ReactNode } from 'react';
+import { Button } from '@/components/ui/button';
+import { Icon } from '@/components/ui/icon';
+import { useBadgeWedge } from '../hooks/use-badge-wedge';
+import { BadgeCamera } from './badge-camera';
+import { TypedBadgeForm } from './typed-badge-form';
+
+interface BadgeReaderProps {
+  prompt: string;
+  onBadge: (code: string) => void;
+  /** While a scan is being looked up, further scans wait. */
+  busy?: boolean;
+  /** What went wrong with the last scan, in words. */
+  message?: ReactNode;
+}
+
+/**
+ * Three ways to give a badge: the camera inside the outline, a hand scanner typing the code,
+ * or the code typed on the screen. Whichever comes first is used.
+ */
+export function BadgeReader({ prompt, onBadge, busy = false, message }: BadgeReaderProps) {
+  const [typing, setTyping] = useState(false);
+  const accept = (code: string) => {
+    if (!busy) onBadge(code);
+  };
+  useBadgeWedge(accept, !typing);
+
+  return (
+    <div className="flex w-full flex-col items-center gap-5">
+      {typing ? (
+        <TypedBadgeForm onCode={accept} onCancel={() => setTyping(false)} disabled={busy} />
+      ) : (
+        <>
+          {/* The outline has the proportions of the badge card (ISO/IEC 7810 ID-1, 85.60 × 53.98 mm). */}
+          <div className="flex aspect-[85.6/53.98] w-full max-w-[28rem] flex-col overflow-hidden rounded-2xl border-4 border-dashed border-ink-muted p-3">
+            <BadgeCamera onCode={accept} />
+          </div>
+          <p className="flex items-center gap-4 text-center text-kiosk-lead font-bold text-balance">
+            <Icon name="badge" className="size-12" />
+            <span>{prompt}</span>
+          </p>
+          <Button variant="link" onClick={() => setTyping(true)}>
+            <Icon name="keyboard" className="size-8" />
+            Type badge code
+          </Button>
+        </>
+      )}
+      {busy ? (
+        <p role="status" className="flex items-center gap-3 text-kiosk-body">
+          <Icon name="hourglass" className="size-8" />
+          Reading the badge…
+        </p>
+      ) : null}
+      {message && !busy ? (
+        <div role="alert" className="flex items-center gap-4 rounded-lg border-2 border-link-down px-6 py-4 text-kiosk-body">
+          <Icon name="warning" className="size-9 text-link-down" />
+          <div>{message}</div>
+        </div>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,21 @@
+import { machineCategoryLabels, type StationSelf } from '@chuckkey/core';
+import { Nameplate } from '@/components/ui/nameplate';
+
+/**
+ * The machine's nameplate. Only "Available" is shown for now: live states (in use, tagged out)
+ * arrive with sessions and tag-outs, and the plate never claims what the station cannot know.
+ */
+export function StationHeader({ station, compact = false }: { station: StationSelf; compact?: boolean }) {
+  if (!station.machine) {
+    return (
+      <header className="bg-brand px-8 py-4 text-white">
+        <p className="text-kiosk-body font-bold tracking-[0.12em] uppercase">{station.name}</p>
+      </header>
+    );
+  }
+  return (
+    <header className="px-6 pt-5">
+      <Nameplate name={station.machine.name} state="available" detail={machineCategoryLabels[station.machine.category as keyof typeof machineCategoryLabels] ?? station.machine.category} size={compact ? 'md' : 'lg'} />
+    </header>
+  );
+}

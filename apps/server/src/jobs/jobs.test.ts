@@ -1,0 +1,53 @@
+import { randomBytes } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Deps } from '../lib/deps';
+import { createLogger } from '../lib/logger';
+import { createMailer, type Mailer } from '../lib/mailer';
+import { createTestContext, type TestContext } from '../test/harness';
+import { SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, startJobs } from './jobs';
+
+let ctx: TestContext;
+let mailer: Mailer;
+let deps: Deps;
+// A schema of this run's own, so pg-boss's tables never meet another run's.
+const schema = `pgboss_test_${randomBytes(4).toString('hex')}`;
+
+beforeAll(() => {
+  ctx = createTestContext();
+  const logger = createLogger('silent');
+  mailer = createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger);
+  deps = { config: ctx.config, db: ctx.db, logger, mailer };
+});
+afterAll(async () => {
+  await ctx.db.raw('drop schema if exists ?? cascade', [schema]);
+  mailer.close();
+  await ctx.close();
+});
+
+describe('background jobs on pg-boss', () => {
+  it('start on the database, schedule the reminders in the shop’s time zone, run a reminder job, and stop', async () => {
+    const jobs = await startJobs(deps, { schema });
+    let stopped = false;
+    jobs.boss.on('stopped', () => {
+      stopped = true;
+    });
+    try {
+      const schedules = await jobs.boss.getSchedules();
+      expect(schedules).toContainEqual(expect.objectContaining({ name: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timezone: 'UTC' }));
+
+      const id = await jobs.boss.send(SIGN_OFF_REMINDERS, {});
+      expect(id).not.toBeNull();
+      const deadline = Date.now() + 15_000;
+      let state: string | undefined;
+      while (Date.now() < deadline) {
+        state = (await jobs.boss.getJobById(SIGN_OFF_REMINDERS, id!))?.state;
+        if (state === 'completed' || state === 'failed') break;
+        await new Promise((resolve) => setTimeout(resolve, 200));
+      }
+      expect(state).toBe('completed');
+    } finally {
+      await jobs.stop();
+    }
+    expect(stopped).toBe(true);
+  });
+});

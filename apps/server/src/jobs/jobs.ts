@@ -1,0 +1,47 @@
+import PgBoss from 'pg-boss';
+import type { Deps } from '../lib/deps';
+import { shopRepository } from '../modules/shop/shop.repository';
+import { signOffRemindersService } from '../modules/sign-offs/reminders.service';
+
+export const SIGN_OFF_REMINDERS = 'sign-off-reminders';
+
+/**
+ * Every hour from 08:00 to 20:00 in the shop's time zone: mail arrives in the day, and a run
+ * missed while the server was down is made up an hour later. Reminders are claimed one by one
+ * in the database, so repeated runs never send twice.
+ */
+export const SIGN_OFF_REMINDERS_CRON = '0 8-20 * * *';
+
+export interface Jobs {
+  boss: PgBoss;
+  stop(): Promise<void>;
+}
+
+/**
+ * Background jobs on pg-boss, in the same PostgreSQL (its own schema). Every server process
+ * may start them: pg-boss puts one job in the queue per scheduled minute, whichever process
+ * is first, and any one worker takes it.
+ */
+export async function startJobs(deps: Deps, options: { schema?: string } = {}): Promise<Jobs> {
+  const { config, db, logger } = deps;
+  const boss = new PgBoss({ connectionString: config.DATABASE_URL, schema: options.schema ?? 'pgboss', max: 3, application_name: 'chuckkey-jobs' });
+  boss.on('error', (error) => logger.error({ err: error }, 'background jobs error'));
+  await boss.start();
+
+  const reminders = signOffRemindersService(deps);
+  const { timeZone } = await shopRepository(db).get();
+  await boss.createQueue(SIGN_OFF_REMINDERS);
+  await boss.schedule(SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, {}, { tz: timeZone });
+  await boss.work(SIGN_OFF_REMINDERS, async () => {
+    await reminders.sendDue(new Date());
+  });
+  logger.info({ queue: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timeZone }, 'background jobs started');
+
+  return {
+    boss,
+    async stop() {
+      // Lets a reminder run in progress finish, then closes pg-boss's own connections.
+      await boss.stop({ graceful: true, wait: true, timeout: 20_000 });
+    },
+  };
+}

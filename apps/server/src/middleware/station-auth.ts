@@ -1,0 +1,89 @@
+import type { Request, RequestHandler, Response } from 'express';
+import { STATION_COOKIE } from '@chuckkey/core';
+import type { Config } from '../config';
+import type { Deps } from '../lib/deps';
+import { AppError } from '../lib/errors';
+import { hashToken } from '../lib/tokens';
+import { stationsRepository, type StationRecord } from '../modules/stations/stations.repository';
+
+declare global {
+  namespace Express {
+    interface Request {
+      /** The paired device that sent the request, set by requireStation. */
+      station?: StationRecord;
+    }
+  }
+}
+
+/** The cookie is sent only to the station routes, not to the rest of the API. */
+export const STATION_COOKIE_PATH = '/api/station';
+// Browsers keep a cookie at most 400 days (RFC 6265bis); the server refreshes it while in use.
+const COOKIE_MAX_AGE_MS = 400 * 24 * 60 * 60 * 1000;
+const LAST_SEEN_EVERY_MS = 60_000;
+
+export const stationRequired = () =>
+  new AppError(401, 'station_required', 'This screen is not paired with a station, or its pairing was revoked. An admin can pair it again.');
+
+function cookieOptions(config: Config, req: Request) {
+  return {
+    httpOnly: true,
+    // The kiosk app lives on the same origin and never follows a link from another site.
+    sameSite: 'strict' as const,
+    secure: config.COOKIE_SECURE === 'auto' ? req.secure : config.COOKIE_SECURE === 'true',
+    path: STATION_COOKIE_PATH,
+  };
+}
+
+export function setStationCookie(config: Config, req: Request, res: Response, token: string): void {
+  res.cookie(STATION_COOKIE, token, { ...cookieOptions(config, req), maxAge: COOKIE_MAX_AGE_MS });
+}
+
+export function clearStationCookie(config: Config, req: Request, res: Response): void {
+  res.clearCookie(STATION_COOKIE, cookieOptions(config, req));
+}
+
+/** The value of one cookie from the Cookie header (RFC 6265 §5.4 syntax). */
+export function readCookie(header: string | undefined, name: string): string | undefined {
+  if (!header) return undefined;
+  for (const pair of header.split(';')) {
+    const separator = pair.indexOf('=');
+    if (separator < 0) continue;
+    if (pair.slice(0, separator).trim() === name) return pair.slice(separator + 1).trim().replace(/^"(.*)"$/, '$1');
+  }
+  return undefined;
+}
+
+/**
+ * Loads the paired station from its device cookie. The device credential is independent of any
+ * person's sign-in: a station keeps working when nobody is signed in, and nobody's session
+ * grants a station's rights.
+ */
+export function requireStation({ config, db }: Deps): RequestHandler {
+  const stations = stationsRepository(db);
+  return async (req, res, next) => {
+    const token = readCookie(req.headers.cookie, STATION_COOKIE);
+    if (!token) {
+      next(stationRequired());
+      return;
+    }
+    const station = await stations.findByDeviceTokenHash(hashToken(token));
+    if (!station || station.revokedAt) {
+      clearStationCookie(config, req, res);
+      next(stationRequired());
+      return;
+    }
+    // Writing on every request would make each heartbeat a row update; once a minute is
+    // precise enough for "last contact" and for spotting a station that went quiet.
+    if (!station.lastSeenAt || Date.now() - station.lastSeenAt.getTime() >= LAST_SEEN_EVERY_MS) {
+      station.lastSeenAt = await stations.touch(station.id);
+      setStationCookie(config, req, res, token);
+    }
+    req.station = station;
+    next();
+  };
+}
+
+export function currentStation(req: Request): StationRecord {
+  if (!req.station) throw stationRequired();
+  return req.station;
+}

@@ -1,0 +1,42 @@
+import type { Role, StationWithCode } from '@chuckkey/core';
+import { hashPassword } from '@chuckkey/db';
+import { createBadge, createMachine, createMember, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
+import { browser, signedIn, type Browser, type TestContext } from '../../test/harness';
+
+/** An admin creates a station for a new machine through the API and gets its pairing code. */
+export async function createStation(ctx: TestContext, admin?: Browser): Promise<{ admin: Browser; machine: MachineRow; station: StationWithCode }> {
+  const client = admin ?? (await signedIn(ctx, 'admin'));
+  const machine = await createMachine(ctx.db);
+  const res = await client.post('/api/stations', { machineId: machine.id });
+  if (res.status !== 201) throw new Error(`station create failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { admin: client, machine, station: res.body as StationWithCode };
+}
+
+/** A kiosk's browser that paired with a fresh station and now holds its device cookie. */
+export async function pairedDevice(ctx: TestContext) {
+  const created = await createStation(ctx);
+  const device = await browser(ctx);
+  const res = await device.post('/api/station/pair', { pairingCode: created.station.pairingCode });
+  if (res.status !== 200) throw new Error(`pairing failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { ...created, device };
+}
+
+export interface BadgeHolder {
+  member: CreatedMember;
+  badge: string;
+  pin: string;
+}
+
+/** A person with an active badge and, unless `pin: null`, a PIN. */
+export async function badgeHolder(
+  ctx: TestContext,
+  role: Role,
+  options: { pin?: string | null; active?: boolean; firstName?: string } = {},
+): Promise<BadgeHolder> {
+  const member = await createMember(ctx.db, { role, active: options.active ?? true, first_name: options.firstName ?? 'Test' });
+  const { code } = await createBadge(ctx.db, { memberId: member.id, badgeSecret: ctx.config.BADGE_SECRET });
+  const pin = options.pin === undefined ? '4827' : options.pin;
+  // Stored as PUT /api/profile/pin stores it: an argon2id hash, like a password.
+  if (pin !== null) await ctx.db('members').where({ id: member.id }).update({ pin_hash: await hashPassword(pin) });
+  return { member, badge: code, pin: pin ?? '' };
+}

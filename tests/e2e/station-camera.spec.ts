@@ -1,0 +1,78 @@
+import { writeFileSync } from 'node:fs';
+import QRCode from 'qrcode';
+import { stationWithCodeSchema } from '@chuckkey/core';
+import { createBadge, createMachine } from '@chuckkey/db/factories';
+import { expect, test } from './fixtures';
+
+const WIDTH = 640;
+const HEIGHT = 480;
+
+/**
+ * One frame of the badge's QR code as a Y4M video for Chromium's fake camera: dark modules at
+ * luma 16 and light at 235 (ITU-R BT.601 video range), with the 4-module quiet zone of
+ * ISO/IEC 18004, error correction level M as on the printed card.
+ */
+function writeBadgeVideo(file: string, code: string): void {
+  const qr = QRCode.create(code, { errorCorrectionLevel: 'M' });
+  const modules = qr.modules.size + 8;
+  const scale = Math.floor(400 / modules);
+  const left = Math.floor((WIDTH - modules * scale) / 2);
+  const top = Math.floor((HEIGHT - modules * scale) / 2);
+  const luma = Buffer.alloc(WIDTH * HEIGHT, 235);
+  for (let row = 0; row < qr.modules.size; row += 1) {
+    for (let col = 0; col < qr.modules.size; col += 1) {
+      if (!qr.modules.get(row, col)) continue;
+      for (let y = 0; y < scale; y += 1) {
+        const start = (top + (row + 4) * scale + y) * WIDTH + left + (col + 4) * scale;
+        luma.fill(16, start, start + scale);
+      }
+    }
+  }
+  // 4:2:0 chroma planes at a quarter of the size each; 128 is no colour.
+  const chroma = Buffer.alloc((WIDTH / 2) * (HEIGHT / 2) * 2, 128);
+  writeFileSync(file, Buffer.concat([Buffer.from(`YUV4MPEG2 W${WIDTH} H${HEIGHT} F30:1 Ip A1:1 C420\n`), Buffer.from('FRAME\n'), luma, chroma]));
+}
+
+test('a badge held to the station’s camera is read and greets the member', async ({ playwright, launchOptions, baseURL, db, createUser }, testInfo) => {
+  const admin = await createUser({ role: 'admin' });
+  const member = await createUser({ role: 'member', first_name: 'Wilhelmina' });
+  const badgeSecret = process.env.BADGE_SECRET;
+  if (!badgeSecret) throw new Error('BADGE_SECRET is not set: the browser tests issue badges the way the server does.');
+  const badge = await createBadge(db, { memberId: member.id, badgeSecret });
+  const machine = await createMachine(db, { category: 'mill' });
+  const video = testInfo.outputPath('badge.y4m');
+  writeBadgeVideo(video, badge.code);
+
+  // A browser of its own: the fake camera plays the file given at launch.
+  const browser = await playwright.chromium.launch({
+    ...launchOptions,
+    args: [...(launchOptions.args ?? []), '--use-fake-ui-for-media-stream', '--use-fake-device-for-media-stream', `--use-file-for-fake-video-capture=${video}`],
+  });
+  let stationId: string | undefined;
+  try {
+    const context = await browser.newContext({ baseURL });
+    const page = await context.newPage();
+    const request = context.request;
+    const { token } = (await (await request.get('/api/auth/csrf')).json()) as { token: string };
+    const headers = { 'x-csrf-token': token };
+    expect((await request.post('/api/auth/login', { headers, data: { email: admin.email, password: admin.password } })).status()).toBe(200);
+    const created = await request.post('/api/stations', { headers, data: { machineId: machine.id } });
+    const station = stationWithCodeSchema.parse(await created.json());
+    stationId = station.id;
+    // The admin's session is no part of the station: sign out before the screen pairs.
+    expect((await request.post('/api/auth/logout', { headers })).status()).toBe(204);
+
+    await page.goto('/kiosk/station');
+    await page.getByLabel('Pairing code').fill(station.pairingCode);
+    await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
+
+    await expect(page.getByRole('heading', { name: 'Hello, Wilhelmina' })).toBeVisible({ timeout: 15_000 });
+    await expect(page.getByText(/does not check clearance yet/)).toBeVisible();
+  } finally {
+    await browser.close();
+    await db('audit_log').whereIn('actor_id', [admin.id]).orWhere({ entity_id: stationId ?? '' }).delete();
+    if (stationId) await db('stations').where({ id: stationId }).delete();
+    await db('machines').where({ id: machine.id }).delete();
+    await db('areas').where({ id: machine.area_id }).delete();
+  }
+});
