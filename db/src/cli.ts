@@ -1,6 +1,6 @@
 import knexFactory from 'knex';
 import { knexConfig } from './config';
-import { setupDatabase } from './setup';
+import { dropDatabase, setupDatabase } from './setup';
 
 const url = process.env.DATABASE_URL;
 if (!url) {
@@ -15,6 +15,12 @@ async function main(databaseUrl: string): Promise<void> {
   switch (command) {
     case 'setup':
       await setupDatabase(databaseUrl, { seed: process.env.SEED_DEMO !== 'false', log });
+      return;
+    case 'reset':
+      // Development only: throws away every change and loads the demo shop afresh.
+      await dropDatabase(databaseUrl);
+      log('database dropped');
+      await setupDatabase(databaseUrl, { seed: true, log });
       return;
     case 'migrate':
       await setupDatabase(databaseUrl, { seed: false, log });
@@ -36,7 +42,7 @@ async function main(databaseUrl: string): Promise<void> {
       return;
     }
     default:
-      console.error(`Unknown command "${command}". Use setup, migrate, rollback or seed.`);
+      console.error(`Unknown command "${command}". Use setup, reset, migrate, rollback or seed.`);
       process.exit(1);
   }
 }
