@@ -73,13 +73,14 @@ export const test = base.extend<TestFixtures, WorkerFixtures>({
     });
     if (created.length === 0) return;
     const emails = created.map((member) => member.email);
-    // Mail and sign-in attempts that the server recorded for these people go with them.
+    const ids = created.map((member) => member.id);
+    // Mail and sign-in attempts that the server recorded for these people go with them, and so
+    // do the records that name them (sign-offs, audit entries), which would block the delete.
     await db('outbox_messages').whereRaw('to_addresses && ?::text[]', [emails]).delete();
     await db('sign_in_attempts').whereIn('email', emails).delete();
-    await deleteMembers(
-      db,
-      created.map((member) => member.id),
-    );
+    await db('audit_log').whereIn('actor_id', ids).orWhereIn('member_id', ids).delete();
+    await db('sign_offs').whereIn('member_id', ids).orWhereIn('signed_by', ids).orWhereIn('revoked_by', ids).delete();
+    await deleteMembers(db, ids);
   },
 
   unknownEmail: async ({ db }, use) => {

@@ -2,9 +2,9 @@ import type { Role } from '@chuckkey/core';
 import { expect, test } from './fixtures';
 
 const linksByRole: Record<Role, string[]> = {
-  member: ['Shop floor', 'Profile'],
-  instructor: ['Shop floor', 'Profile'],
-  admin: ['Shop floor', 'Profile', 'People', 'Outbox'],
+  member: ['Shop floor', 'My record', 'Profile'],
+  instructor: ['Shop floor', 'My record', 'Profile', 'Teach'],
+  admin: ['Shop floor', 'My record', 'Profile', 'Teach', 'People', 'Setup', 'Outbox'],
 };
 
 const article = (role: Role) => (role === 'admin' || role === 'instructor' ? 'an' : 'a');
@@ -16,8 +16,9 @@ test.describe('main navigation', () => {
 
       const navLinks = page.getByRole('navigation', { name: 'Main' }).getByRole('link');
       await expect(navLinks).toHaveCount(links.length);
+      // In the order of screens.md: everyone's pages first, then the instructors', then the admins'.
       const names = (await navLinks.allInnerTexts()).map((text) => text.trim());
-      expect(names.toSorted()).toEqual(links.toSorted());
+      expect(names).toEqual(links);
     });
   }
 
@@ -30,6 +31,32 @@ test.describe('main navigation', () => {
     await expect(page.getByRole('table')).toHaveCount(0);
     const members = await page.request.get('/api/members');
     expect(members.status()).toBe(403);
+  });
+
+  test('an instructor cannot open Setup, and the API refuses them a new machine', async ({ page, signInAs }) => {
+    await signInAs('instructor');
+
+    await page.goto('/setup/machines');
+
+    await expect(page.getByRole('heading', { name: /don['’]t have access to Setup/ })).toBeVisible();
+    await expect(page.getByRole('link', { name: 'Add a machine' })).toHaveCount(0);
+    const { token } = (await (await page.request.get('/api/auth/csrf')).json()) as { token: string };
+    const created = await page.request.post('/api/machines', {
+      headers: { 'x-csrf-token': token },
+      data: { name: 'Not allowed', category: 'lathe', areaId: '00000000-0000-4000-8000-000000000000' },
+    });
+    expect(created.status()).toBe(403);
+  });
+
+  test('an admin finds the sign-off report and the audit log under People', async ({ page, signInAs }) => {
+    await signInAs('admin');
+
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'People' }).click();
+    const people = page.getByRole('navigation', { name: 'People' });
+    await people.getByRole('link', { name: 'Sign-offs' }).click();
+    await expect(page.getByRole('heading', { level: 1, name: 'Sign-offs to renew' })).toBeVisible();
+    await people.getByRole('link', { name: 'Audit log' }).click();
+    await expect(page.getByRole('heading', { level: 1, name: 'Audit log' })).toBeVisible();
   });
 
   test('signing out returns to the sign-in page and ends the session', async ({ page, signInAs }) => {

@@ -1,4 +1,6 @@
-import { writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import QRCode from 'qrcode';
 import { stationWithCodeSchema } from '@chuckkey/core';
 import { createBadge, createMachine } from '@chuckkey/db/factories';
@@ -33,14 +35,16 @@ function writeBadgeVideo(file: string, code: string): void {
   writeFileSync(file, Buffer.concat([Buffer.from(`YUV4MPEG2 W${WIDTH} H${HEIGHT} F30:1 Ip A1:1 C420\n`), Buffer.from('FRAME\n'), luma, chroma]));
 }
 
-test('a badge held to the station’s camera is read and greets the member', async ({ playwright, launchOptions, baseURL, db, createUser }, testInfo) => {
+test('a badge held to the station’s camera is read and greets the member', async ({ playwright, launchOptions, baseURL, db, createUser }) => {
   const admin = await createUser({ role: 'admin' });
   const member = await createUser({ role: 'member', first_name: 'Wilhelmina' });
   const badgeSecret = process.env.BADGE_SECRET;
   if (!badgeSecret) throw new Error('BADGE_SECRET is not set: the browser tests issue badges the way the server does.');
   const badge = await createBadge(db, { memberId: member.id, badgeSecret });
   const machine = await createMachine(db, { category: 'mill' });
-  const video = testInfo.outputPath('badge.y4m');
+  // Outside test-results, which another run of the suite may empty while this browser reads it.
+  const folder = mkdtempSync(path.join(os.tmpdir(), 'chuckkey-camera-'));
+  const video = path.join(folder, 'badge.y4m');
   writeBadgeVideo(video, badge.code);
 
   // A browser of its own: the fake camera plays the file given at launch.
@@ -66,10 +70,16 @@ test('a badge held to the station’s camera is read and greets the member', asy
     await page.getByLabel('Pairing code').fill(station.pairingCode);
     await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
 
-    await expect(page.getByRole('heading', { name: 'Hello, Wilhelmina' })).toBeVisible({ timeout: 15_000 });
+    try {
+      await expect(page.getByRole('heading', { name: 'Hello, Wilhelmina' })).toBeVisible({ timeout: 15_000 });
+    } catch (e) {
+      console.log('DEBUG', badge.code, await page.evaluate(() => { const v = document.querySelector('video'); const c = document.querySelector('canvas'); return JSON.stringify([v?.videoWidth, v?.videoHeight, v?.clientWidth, v?.clientHeight, c?.width, c?.height]); }));
+      throw e;
+    }
     await expect(page.getByText(/does not check clearance yet/)).toBeVisible();
   } finally {
     await browser.close();
+    rmSync(folder, { recursive: true, force: true });
     await db('audit_log').whereIn('actor_id', [admin.id]).orWhere({ entity_id: stationId ?? '' }).delete();
     if (stationId) await db('stations').where({ id: stationId }).delete();
     await db('machines').where({ id: machine.id }).delete();

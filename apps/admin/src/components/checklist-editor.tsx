@@ -96,7 +96,7 @@ export function ChecklistEditor({ legend, hint, items, onChange, error, itemErro
                   <Button id={idOf(item.key, 'up')} variant="secondary" onClick={() => move(index, -1)} disabled={index === 0} className="px-3">
                     <ArrowUpIcon />
                     <span>
-                      Up<span className="sr-only">: move item {number} up</span>
+                      <span className="sr-only">Move item {number} </span>Up
                     </span>
                   </Button>
                   <Button
@@ -108,7 +108,7 @@ export function ChecklistEditor({ legend, hint, items, onChange, error, itemErro
                   >
                     <ArrowDownIcon />
                     <span>
-                      Down<span className="sr-only">: move item {number} down</span>
+                      <span className="sr-only">Move item {number} </span>Down
                     </span>
                   </Button>
                   <Button variant="secondary" onClick={() => remove(index)} className={cn('px-3', 'sm:ml-auto')}>

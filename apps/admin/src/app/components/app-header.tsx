@@ -39,7 +39,7 @@ export function AppHeader({ user, shopName, signingOut, onSignOut }: AppHeaderPr
 
   return (
     <header className="border-b border-neutral-300 bg-white">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-2">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
         <Link to={paths.home.getHref()} className="flex min-h-11 flex-col justify-center rounded-md">
           <span className="font-bold tracking-[0.2em] text-brand uppercase">Chuckkey</span>
           {shopName && <span className="text-sm text-neutral-700">{shopName}</span>}
@@ -67,11 +67,11 @@ export function AppHeader({ user, shopName, signingOut, onSignOut }: AppHeaderPr
           }}
           className={cn(
             menuOpen ? 'flex' : 'hidden',
-            'w-full flex-col gap-3 pb-3 md:flex md:w-auto md:flex-1 md:flex-row md:items-center md:pb-0',
+            'w-full flex-col gap-3 pb-3 md:flex md:w-auto md:flex-1 md:flex-row md:flex-wrap md:items-center md:gap-x-3 md:pb-0',
           )}
         >
           <nav aria-label="Main">
-            <ul className="flex flex-col gap-1 md:flex-row">
+            <ul className="flex flex-col gap-1 md:flex-row md:flex-wrap">
               {items.map((item) => (
                 <li key={item.to}>
                   <NavLink
@@ -80,7 +80,7 @@ export function AppHeader({ user, shopName, signingOut, onSignOut }: AppHeaderPr
                     onClick={() => setMenuOpen(false)}
                     className={({ isActive }) =>
                       cn(
-                        'flex min-h-11 items-center rounded-md px-3 font-bold md:min-h-10',
+                        'flex min-h-11 items-center rounded-md px-3 font-bold whitespace-nowrap md:min-h-10 md:px-2',
                         isActive
                           ? 'bg-brand-soft text-brand shadow-[inset_0_-3px_0_var(--color-brand)]'
                           : 'text-neutral-800 hover:bg-neutral-100',

@@ -32,7 +32,9 @@ export default function PeopleRoute() {
         ? {
             selected: new Set(chosen.keys()),
             onSelect,
-            rowActions: (member: Member) => <PrintCardLink memberId={member.id} name={member.name} />,
+            rowActions: (member: Member, place: 'row' | 'card') => (
+              <PrintCardLink memberId={member.id} name={member.name} compact={place === 'row'} />
+            ),
           }
         : {},
     [canPrint, chosen, onSelect],

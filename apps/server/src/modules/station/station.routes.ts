@@ -14,9 +14,11 @@ export function stationRoutes(deps: Deps): Router {
   const service = stationService(deps);
   const router = Router();
 
-  // Per process, in memory: about 40 bits of code, 10 minutes of life and 10 tries per address
-  // per 15 minutes leave nothing to guess.
-  router.post('/pair', perAddressLimit(10), async (req, res) => {
+  // Per process, in memory: about 40 bits of code, 10 minutes of life and 10 wrong tries per
+  // address per 15 minutes leave nothing to guess. Successful pairings are not counted, so an
+  // admin setting up a room of stations behind one address is not held up.
+  const pairLimit = perAddressLimit(10, 15, { countSuccesses: false });
+  router.post('/pair', pairLimit, async (req, res) => {
     const { pairingCode } = parse(pairSchema, req.body, 'body');
     const { token, stationId } = await service.pair(pairingCode);
     setStationCookie(deps.config, req, res, token);

@@ -114,7 +114,15 @@ describe('POST /api/station/pair', () => {
     expect(res.body.errors.pairingCode).toBeDefined();
   });
 
-  it('after 10 tries from one address answers 429', async () => {
+  it('successful pairings from one address do not use up its tries', async () => {
+    const device = await browser(ctx);
+    for (let i = 0; i < 11; i += 1) {
+      const { station } = await createStation(ctx);
+      expect((await device.post('/api/station/pair', { pairingCode: station.pairingCode })).status).toBe(200);
+    }
+  });
+
+  it('after 10 wrong tries from one address answers 429', async () => {
     const device = await browser(ctx);
     const statuses: number[] = [];
     for (let i = 0; i < 11; i += 1) statuses.push((await device.post('/api/station/pair', { pairingCode: 'ZZZZ2222' })).status);

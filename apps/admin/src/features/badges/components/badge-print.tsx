@@ -2,14 +2,32 @@ import { Button, buttonClasses } from '../../../components/ui/button';
 import { PrinterIcon } from '../../../components/ui/icons';
 import { badgeCardHref, badgeSheetHref } from '../utils/badge-links';
 
+interface PrintCardLinkProps {
+  memberId: string;
+  name: string;
+  /** In a row of a table only the printer shows; the link's name for screen readers stays whole. */
+  compact?: boolean;
+}
+
 /** Opens the member's card as a PDF in a new tab, where the browser's own print dialog takes over. */
-export function PrintCardLink({ memberId, name }: { memberId: string; name: string }) {
+export function PrintCardLink({ memberId, name, compact = false }: PrintCardLinkProps) {
+  const label = `Print badge card for ${name}`;
   return (
-    <a href={badgeCardHref(memberId)} target="_blank" rel="noreferrer" className={buttonClasses('secondary', 'px-3')}>
+    <a
+      href={badgeCardHref(memberId)}
+      target="_blank"
+      rel="noreferrer"
+      title={compact ? label : undefined}
+      className={buttonClasses('secondary', compact ? 'min-w-11 px-2' : 'px-3 whitespace-nowrap')}
+    >
       <PrinterIcon />
-      <span>
-        Print badge card<span className="sr-only"> for {name}</span>
-      </span>
+      {compact ? (
+        <span className="sr-only">{label}</span>
+      ) : (
+        <span>
+          Print badge card<span className="sr-only"> for {name}</span>
+        </span>
+      )}
     </a>
   );
 }
@@ -41,14 +59,19 @@ export function BadgeSheetBar({ chosen, onClear }: BadgeSheetBarProps) {
         )}
       </div>
       {count > 0 && (
-        <div className="flex flex-wrap gap-2">
+        <div className="flex shrink-0 flex-wrap gap-2">
           {!tooMany && (
-            <a href={badgeSheetHref(chosen.map((member) => member.id))} target="_blank" rel="noreferrer" className={buttonClasses('primary')}>
+            <a
+              href={badgeSheetHref(chosen.map((member) => member.id))}
+              target="_blank"
+              rel="noreferrer"
+              className={buttonClasses('primary', 'whitespace-nowrap')}
+            >
               <PrinterIcon />
               Print badge sheet
             </a>
           )}
-          <Button variant="secondary" onClick={onClear}>
+          <Button variant="secondary" onClick={onClear} className="whitespace-nowrap">
             Clear the choice
           </Button>
         </div>

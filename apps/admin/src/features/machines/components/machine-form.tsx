@@ -15,7 +15,7 @@ import { checklistDraftSchema, newDraftKey, toDraft, withChecklistIds } from '..
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateMachine } from '../api/create-machine';
 import { useUpdateMachine } from '../api/update-machine';
-import { missingUsualItems } from '../utils/usual-safety-items';
+import { usualSafetyItems } from '../utils/usual-safety-items';
 
 const formSchema = machineInputSchema.extend({ safetyChecklist: checklistDraftSchema });
 type FormInput = z.input<typeof formSchema>;
@@ -58,7 +58,8 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
   });
   const category = useWatch({ control, name: 'category' });
   const checklist = useWatch({ control, name: 'safetyChecklist' }) ?? [];
-  const suggestions = missingUsualItems(category, checklist.map((item) => item.label));
+  // Offered for an empty list only: next to items of the shop's own wording they would read as repeats.
+  const suggestions = checklist.length === 0 ? usualSafetyItems[category] : [];
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -162,7 +163,7 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
       {suggestions.length > 0 && (
         <div className="flex flex-col gap-2 rounded-md border border-neutral-300 bg-white p-3">
           <p className="text-neutral-800">
-            Usual items for a {machineCategoryLabels[category].toLowerCase()} not on the list yet: {suggestions.join('; ')}.
+            Usual items for a {machineCategoryLabels[category].toLowerCase()}, to start from and reword: {suggestions.join('; ')}.
           </p>
           <div>
             <Button
@@ -174,7 +175,7 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
                 ])
               }
             >
-              Add the usual items
+              Start from the usual items
             </Button>
           </div>
         </div>

@@ -51,10 +51,3 @@ export const usualSafetyItems: Record<MachineCategory, string[]> = {
     'Stand to the side of the wheel when starting it',
   ],
 };
-
-/** The usual items a checklist does not have yet, compared without regard to case and spacing. */
-export function missingUsualItems(category: MachineCategory, labels: readonly string[]): string[] {
-  const norm = (text: string) => text.trim().replace(/\s+/g, ' ').toLocaleLowerCase();
-  const present = new Set(labels.map(norm));
-  return usualSafetyItems[category].filter((item) => !present.has(norm(item)));
-}

@@ -51,7 +51,7 @@ export function MemberCards({ members, currentUserId, timeZone, onChange, extras
               </label>
             )}
             <div className="flex flex-wrap gap-2">
-              {rowActions?.(member)}
+              {rowActions?.(member, 'card')}
               {!isSelf && <ActiveToggle member={member} onChange={onChange} />}
             </div>
           </li>

@@ -8,5 +8,6 @@ import type { ReactNode } from 'react';
 export interface MemberExtras {
   selected?: ReadonlySet<string>;
   onSelect?: (members: Member[], selected: boolean) => void;
-  rowActions?: (member: Member) => ReactNode;
+  /** A table row has room for little; a card on a phone has room for words. */
+  rowActions?: (member: Member, place: 'row' | 'card') => ReactNode;
 }

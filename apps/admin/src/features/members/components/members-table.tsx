@@ -83,8 +83,8 @@ export function MembersTable({ members, filters, currentUserId, timeZone, onSort
                 <StatusBadge active={member.active} />
               </Td>
               <Td>
-                <div className="flex flex-wrap justify-end gap-2">
-                  {rowActions?.(member)}
+                <div className="flex justify-end gap-2">
+                  {rowActions?.(member, 'row')}
                   {!isSelf && <ActiveToggle member={member} onChange={onChange} />}
                 </div>
               </Td>

@@ -142,8 +142,8 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
         {formError && <Alert tone="error">{formError}</Alert>}
         <input type="hidden" {...register('memberId')} />
 
-        <section aria-labelledby="sign-off-member" className="flex flex-col gap-3">
-          <h3 id="sign-off-member" className="text-lg font-bold text-neutral-900">
+        <section className="flex flex-col gap-3">
+          <h3 className="text-lg font-bold text-neutral-900">
             1. Member
           </h3>
           {member ? (
@@ -199,8 +199,8 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
           )}
         </section>
 
-        <section aria-labelledby="sign-off-training" className="flex flex-col gap-4">
-          <h3 id="sign-off-training" className="text-lg font-bold text-neutral-900">
+        <section className="flex flex-col gap-4">
+          <h3 className="text-lg font-bold text-neutral-900">
             2. Training and practical check
           </h3>
           <SelectField
@@ -258,8 +258,8 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
           )}
         </section>
 
-        <section aria-labelledby="sign-off-level" className="flex flex-col gap-4">
-          <h3 id="sign-off-level" className="text-lg font-bold text-neutral-900">
+        <section className="flex flex-col gap-4">
+          <h3 className="text-lg font-bold text-neutral-900">
             3. Level and note
           </h3>
           <ChoiceGroup legend="Level" error={errors.level?.message}>
@@ -275,8 +275,8 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
           />
         </section>
 
-        <section aria-labelledby="sign-off-confirm" className="flex flex-col gap-3 rounded-lg border border-neutral-300 bg-neutral-50 p-4">
-          <h3 id="sign-off-confirm" className="text-lg font-bold text-neutral-900">
+        <section className="flex flex-col gap-3 rounded-lg border border-neutral-300 bg-neutral-50 p-4">
+          <h3 className="text-lg font-bold text-neutral-900">
             Before you confirm
           </h3>
           <dl className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-[auto_1fr]">

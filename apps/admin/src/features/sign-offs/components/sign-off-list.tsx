@@ -45,9 +45,9 @@ export function SignOffList({ memberId, timeZone, canRevoke = false, empty, labe
       {signOffs.data.length === 0 ? (
         <EmptyState title={empty} />
       ) : (
-        <ul aria-label={label} className="grid grid-cols-1 gap-3 xl:grid-cols-2">
+        <ul aria-label={label} className="flex flex-col gap-3">
           {signOffs.data.map((signOff) => (
-            <li key={signOff.id} className="grid">
+            <li key={signOff.id}>
               <SignOffCard
                 signOff={signOff}
                 timeZone={timeZone}

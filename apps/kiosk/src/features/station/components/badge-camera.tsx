@@ -69,7 +69,9 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
 
   return (
     <div className="relative flex h-full w-full items-center justify-center overflow-hidden rounded-xl bg-black/40">
-      <div id={elementId} className="h-full w-full [&_video]:h-full [&_video]:w-full [&_video]:object-cover" />
+      {/* html5-qrcode sizes the video itself and maps it to its canvas by that size: restyling
+          the video would stretch what is decoded, so the outline only crops it. */}
+      <div id={elementId} className="w-full" />
       {status !== 'running' ? (
         <p role="status" className="absolute inset-0 flex items-center justify-center gap-4 px-6 text-center text-kiosk-body">
           {status === 'starting' ? (
