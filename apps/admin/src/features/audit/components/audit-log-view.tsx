@@ -96,7 +96,7 @@ export function AuditLogView({ timeZone }: { timeZone: string | undefined }) {
                     )}
                   </Td>
                   <Td className="text-sm">
-                    {detailLines(entry.details).map((line, index) => (
+                    {detailLines(entry.details, (iso) => formatDateTime(iso, timeZone)).map((line, index) => (
                       <p key={index} className="break-words">
                         {line}
                       </p>

@@ -40,4 +40,13 @@ describe('audit log words', () => {
       'Level: —',
     ]);
   });
+
+  it('leaves out ids and writes instants as the page writes dates', () => {
+    const lines = detailLines(
+      { trainingId: 'a1', memberIds: ['b2'], trainingName: 'Band saw', expiresAt: '2027-03-01T06:00:00.000Z', via: 'web' },
+      (iso) => `date(${iso.slice(0, 10)})`,
+    );
+
+    expect(lines).toEqual(['Training name: Band saw', 'Expires at: date(2027-03-01)', 'Via: web']);
+  });
 });

@@ -59,14 +59,21 @@ function words(key: string): string {
   return spaced.charAt(0).toUpperCase() + spaced.slice(1);
 }
 
-function valueText(value: unknown): string {
+const ISO_INSTANT = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}/;
+
+function valueText(value: unknown, instant: (iso: string) => string): string {
   if (value === null || value === undefined) return '—';
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return ISO_INSTANT.test(value) ? instant(value) : value;
   if (typeof value === 'number' || typeof value === 'boolean') return String(value);
   return JSON.stringify(value);
 }
 
-/** An entry's details as short lines of plain words: { fromRole: "member" } → "From role: member". */
-export function detailLines(details: Record<string, unknown>): string[] {
-  return Object.entries(details).map(([key, value]) => `${words(key)}: ${valueText(value)}`);
+/**
+ * An entry's details as short lines of plain words: { fromRole: "member" } → "From role: member".
+ * Ids are left out (the entry links its member already) and instants are written as dates.
+ */
+export function detailLines(details: Record<string, unknown>, instant: (iso: string) => string = (iso) => iso): string[] {
+  return Object.entries(details)
+    .filter(([key]) => !/(^id|Id|Ids|_id|_ids)$/.test(key))
+    .map(([key, value]) => `${words(key)}: ${valueText(value, instant)}`);
 }

@@ -37,7 +37,7 @@ export function BadgePanel({ memberId, timeZone }: BadgePanelProps) {
               The old card no longer works. Download and print the new card, or show this page at a station.
             </Alert>
           )}
-          <div className="flex flex-col gap-4 sm:flex-row sm:items-start">
+          <div className="flex flex-col gap-4">
             <img
               src={badgeQrSrc(memberId, badge.data.id)}
               alt="QR code of your badge, for a station's camera"
@@ -47,7 +47,7 @@ export function BadgePanel({ memberId, timeZone }: BadgePanelProps) {
             />
             <div className="flex flex-col gap-3">
               <p className="text-neutral-800">Issued {formatDate(badge.data.issuedAt, timeZone)}.</p>
-              <a href={badgeCardHref(memberId)} download className={buttonClasses('primary', 'self-start')}>
+              <a href={badgeCardHref(memberId)} download className={buttonClasses('primary', 'self-start whitespace-nowrap')}>
                 <DownloadIcon />
                 Download badge card (PDF)
               </a>

@@ -50,7 +50,7 @@ export function PinForm() {
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
         {formError && <Alert tone="error">{formError}</Alert>}
         {saved && <Alert tone="success">Your PIN is saved. Use it from your next scan at a station.</Alert>}
-        <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
+        <div className="flex flex-col gap-4">
           <TextField
             label="New PIN"
             hint="4 to 6 digits. Not your birthday, not 1234."

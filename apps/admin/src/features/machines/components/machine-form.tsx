@@ -163,7 +163,7 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
       {suggestions.length > 0 && (
         <div className="flex flex-col gap-2 rounded-md border border-neutral-300 bg-white p-3">
           <p className="text-neutral-800">
-            Usual items for a {machineCategoryLabels[category].toLowerCase()}, to start from and reword: {suggestions.join('; ')}.
+            Usual items for this kind of machine ({machineCategoryLabels[category]}), to start from and reword: {suggestions.join('; ')}.
           </p>
           <div>
             <Button

@@ -6,7 +6,7 @@ import type { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { CheckIcon } from '../../../components/ui/icons';
+import { CheckIcon, WarningIcon } from '../../../components/ui/icons';
 import { Panel } from '../../../components/ui/panel';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
@@ -106,9 +106,12 @@ export function WaiverPanel({ memberId, name, timeZone }: WaiverPanelProps) {
           </p>
         ) : (
           <>
-            <Alert tone="warning" title="Not on file yet">
-              Stations clear you for no machine until you accept the current waiver. Read it to the end first.
-            </Alert>
+            <p className="flex items-start gap-2 text-neutral-900">
+              <WarningIcon className="mt-0.5 size-5 shrink-0 text-warning" />
+              <span>
+                <strong>Not on file yet.</strong> Read the waiver to the end, then sign it below.
+              </span>
+            </p>
             <article aria-labelledby="waiver-title" className="flex flex-col gap-2 rounded-md border border-neutral-300 bg-neutral-50 p-4">
               <h3 id="waiver-title" className="text-lg font-bold text-neutral-900">
                 {status.data.current.title}

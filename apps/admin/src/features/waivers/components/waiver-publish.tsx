@@ -87,6 +87,16 @@ export function WaiverPublisher({ timeZone }: { timeZone: string | undefined }) 
             their waiver is not on file and stations clear them for no machine. Have the text checked against the shop&apos;s rules
             and local law first.
           </Alert>
+          {current.data && (
+            <div>
+              <Button
+                variant="secondary"
+                onClick={() => current.data && reset({ title: current.data.title, body: current.data.body })}
+              >
+                Start from the current text
+              </Button>
+            </div>
+          )}
           <TextField label="Title" autoComplete="off" error={errors.title?.message} {...register('title')} />
           <TextAreaField label="Waiver text" rows={12} error={errors.body?.message} {...register('body')} />
           <div>

@@ -1,15 +1,18 @@
 import { Html5Qrcode, Html5QrcodeSupportedFormats } from 'html5-qrcode';
 import { useEffect, useEffectEvent, useId, useRef, useState } from 'react';
 import { Icon } from '@/components/ui/icon';
+import { READ_WIDTH, readQr } from '../utils/frame-reader';
 
 type CameraStatus = 'starting' | 'running' | 'unavailable';
 
 // The same badge stays in front of the camera for many frames; one read per second is enough.
 const SAME_CODE_QUIET_MS = 3_000;
+const SECOND_READER_EVERY_MS = 400;
 
 /**
- * The camera preview inside the badge outline, reading QR codes with html5-qrcode. The whole
- * frame is scanned (no qrbox), so a badge held anywhere in view is read, whatever its size.
+ * The camera preview inside the badge outline, reading QR codes with html5-qrcode and, on the
+ * same video, jsQR. The whole frame is scanned (no qrbox), so a badge held anywhere in view is
+ * read, whatever its size.
  */
 export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
   const elementId = `badge-camera-${useId().replace(/[^A-Za-z0-9_-]/g, '')}`;
@@ -22,7 +25,28 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
   useEffect(() => {
     let cancelled = false;
     let scanner: Html5Qrcode | undefined;
+    let secondReader: ReturnType<typeof setInterval> | undefined;
     let last = { code: '', at: 0 };
+    const found = (text: string) => {
+      const now = Date.now();
+      if (text === last.code && now - last.at < SAME_CODE_QUIET_MS) return;
+      last = { code: text, at: now };
+      emit(text);
+    };
+    // Reads the video html5-qrcode shows, for the codes its own decoder misses.
+    const canvas = document.createElement('canvas');
+    const readFrame = () => {
+      const video = document.getElementById(elementId)?.querySelector('video');
+      if (!video || video.readyState < HTMLMediaElement.HAVE_CURRENT_DATA || !video.videoWidth) return;
+      const scale = Math.min(1, READ_WIDTH / video.videoWidth);
+      canvas.width = Math.round(video.videoWidth * scale);
+      canvas.height = Math.round(video.videoHeight * scale);
+      const context = canvas.getContext('2d', { willReadFrequently: true });
+      if (!context) return;
+      context.drawImage(video, 0, 0, canvas.width, canvas.height);
+      const text = readQr(context.getImageData(0, 0, canvas.width, canvas.height).data, canvas.width, canvas.height);
+      if (text) found(text);
+    };
 
     queue.current = queue.current.then(async () => {
       if (cancelled) return;
@@ -36,16 +60,12 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
           // The station's camera faces the person standing at it.
           { facingMode: 'user' },
           { fps: 10 },
-          (text) => {
-            const now = Date.now();
-            if (text === last.code && now - last.at < SAME_CODE_QUIET_MS) return;
-            last = { code: text, at: now };
-            emit(text);
-          },
+          found,
           () => undefined,
         );
         scanner = instance;
         if (cancelled) return;
+        secondReader = setInterval(readFrame, SECOND_READER_EVERY_MS);
         setStatus('running');
       } catch {
         // No camera, or the browser was not allowed to use it: the other ways still work.
@@ -55,6 +75,7 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
 
     return () => {
       cancelled = true;
+      clearInterval(secondReader);
       queue.current = queue.current.then(async () => {
         if (!scanner) return;
         try {
