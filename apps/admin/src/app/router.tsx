@@ -42,6 +42,7 @@ export function createAppRouter() {
             { path: paths.setupTrainings.path, lazy: page(() => import('./routes/setup-trainings')) },
             { path: paths.setupTrainingNew.path, lazy: page(() => import('./routes/setup-training-edit')) },
             { path: paths.setupTraining.path, lazy: page(() => import('./routes/setup-training-edit')) },
+            { path: paths.setupStations.path, lazy: page(() => import('./routes/setup-stations')) },
             { path: paths.setupWaiver.path, lazy: page(() => import('./routes/setup-waiver')) },
             { path: paths.outbox.path, lazy: page(() => import('./routes/outbox')) },
             { path: '*', lazy: page(() => import('./routes/not-found')) },

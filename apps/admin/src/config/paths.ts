@@ -41,6 +41,7 @@ export const paths = {
     path: '/setup/trainings/:trainingId',
     getHref: (trainingId: string) => `/setup/trainings/${encodeURIComponent(trainingId)}`,
   },
+  setupStations: { path: '/setup/stations', getHref: () => '/setup/stations' },
   setupWaiver: { path: '/setup/waiver', getHref: () => '/setup/waiver' },
   outbox: { path: '/outbox', getHref: () => '/outbox' },
 } as const;

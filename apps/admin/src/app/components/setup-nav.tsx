@@ -5,6 +5,7 @@ import { paths } from '../../config/paths';
 const items: { label: string; to: string; permission: Permission }[] = [
   { label: 'Machines', to: paths.setupMachines.getHref(), permission: 'manage:machine:any' },
   { label: 'Trainings', to: paths.setupTrainings.getHref(), permission: 'manage:training:any' },
+  { label: 'Stations', to: paths.setupStations.getHref(), permission: 'manage:station:any' },
   { label: 'Waiver', to: paths.setupWaiver.getHref(), permission: 'manage:waiver:any' },
 ];
 
