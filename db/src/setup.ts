@@ -63,6 +63,14 @@ export async function setupDatabase(
     } else if (options.seed) {
       log('demo shop already loaded; keeping its data');
     }
+    // The server needs its shop row (name, time zone); a database set up without the demo
+    // gets a plain one that admins rename.
+    const inserted = await db('shop')
+      .insert({ id: 1, name: 'Metal shop', town: '', time_zone: 'UTC' })
+      .onConflict('id')
+      .ignore()
+      .returning('id');
+    if (inserted.length) log('created the shop record (name "Metal shop", time zone UTC)');
     return { migrations: applied, seeded };
   } finally {
     await db.destroy();
