@@ -2,9 +2,9 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import QRCode from 'qrcode';
-import { stationWithCodeSchema } from '@chuckkey/core';
 import { createBadge, createMachine } from '@chuckkey/db/factories';
 import { expect, test } from './fixtures';
+import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows } from './station-fixtures';
 
 const WIDTH = 640;
 const HEIGHT = 480;
@@ -38,9 +38,7 @@ function writeBadgeVideo(file: string, code: string): void {
 test('a badge held to the station’s camera is read and greets the member', async ({ playwright, launchOptions, baseURL, db, createUser }) => {
   const admin = await createUser({ role: 'admin' });
   const member = await createUser({ role: 'member', first_name: 'Wilhelmina' });
-  const badgeSecret = process.env.BADGE_SECRET;
-  if (!badgeSecret) throw new Error('BADGE_SECRET is not set: the browser tests issue badges the way the server does.');
-  const badge = await createBadge(db, { memberId: member.id, badgeSecret });
+  const badge = await createBadge(db, { memberId: member.id, badgeSecret: badgeSecret() });
   const machine = await createMachine(db, { category: 'mill' });
   // Outside test-results, which another run of the suite may empty while this browser reads it.
   const folder = mkdtempSync(path.join(os.tmpdir(), 'chuckkey-camera-'));
@@ -56,28 +54,15 @@ test('a badge held to the station’s camera is read and greets the member', asy
   try {
     const context = await browser.newContext({ baseURL });
     const page = await context.newPage();
-    const request = context.request;
-    const { token } = (await (await request.get('/api/auth/csrf')).json()) as { token: string };
-    const headers = { 'x-csrf-token': token };
-    expect((await request.post('/api/auth/login', { headers, data: { email: admin.email, password: admin.password } })).status()).toBe(200);
-    const created = await request.post('/api/stations', { headers, data: { machineId: machine.id } });
-    const station = stationWithCodeSchema.parse(await created.json());
+    const station = await createStationAsAdmin(context.request, admin, machine.id);
     stationId = station.id;
-    // The admin's session is no part of the station: sign out before the screen pairs.
-    expect((await request.post('/api/auth/logout', { headers })).status()).toBe(204);
-
-    await page.goto('/kiosk/station');
-    await page.getByLabel('Pairing code').fill(station.pairingCode);
-    await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
+    await pairScreen(page, station.pairingCode);
 
     await expect(page.getByRole('heading', { name: 'Hello, Wilhelmina' })).toBeVisible({ timeout: 15_000 });
     await expect(page.getByText(/does not check clearance yet/)).toBeVisible();
   } finally {
     await browser.close();
     rmSync(folder, { recursive: true, force: true });
-    await db('audit_log').whereIn('actor_id', [admin.id]).orWhere({ entity_id: stationId ?? '' }).delete();
-    if (stationId) await db('stations').where({ id: stationId }).delete();
-    await db('machines').where({ id: machine.id }).delete();
-    await db('areas').where({ id: machine.area_id }).delete();
+    await removeStationRows(db, { people: [admin.id, member.id], stationId, machine });
   }
 });

@@ -1,24 +1,10 @@
-import type { APIRequestContext, Page } from '@playwright/test';
-import { stationWithCodeSchema } from '@chuckkey/core';
 import { hashPassword } from '@chuckkey/db';
 import { createBadge, createMachine, createTraining, type CreatedMember } from '@chuckkey/db/factories';
 import type { Knex } from 'knex';
+import type { Page } from '@playwright/test';
+import { expectNoWcagViolations } from './axe';
 import { expect, test } from './fixtures';
-
-function badgeSecret(): string {
-  const secret = process.env.BADGE_SECRET;
-  if (!secret) throw new Error('BADGE_SECRET is not set: the browser tests issue badges the way the server does.');
-  return secret;
-}
-
-/** An admin's API session, signed in the way the web app signs in (CSRF token first). */
-async function adminApi(request: APIRequestContext, admin: CreatedMember) {
-  const { token } = (await (await request.get('/api/auth/csrf')).json()) as { token: string };
-  const headers = { 'x-csrf-token': token };
-  const login = await request.post('/api/auth/login', { headers, data: { email: admin.email, password: admin.password } });
-  expect(login.status()).toBe(200);
-  return { post: (path: string, data: object = {}) => request.post(path, { headers, data }) };
-}
+import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows } from './station-fixtures';
 
 async function typeBadge(page: Page, code: string) {
   await page.getByRole('button', { name: 'Type badge code' }).click();
@@ -31,7 +17,7 @@ async function withPin(db: Knex, member: CreatedMember, pin: string) {
   await db('members').where({ id: member.id }).update({ pin_hash: await hashPassword(pin) });
 }
 
-test('an instructor signs a member off at a paired station with badge, PIN and the checklist', async ({ page, playwright, baseURL, db, shop, createUser }) => {
+test('an instructor signs a member off at a paired station with badge, PIN and the checklist', async ({ page, db, createUser }) => {
   const admin = await createUser({ role: 'admin' });
   const instructor = await createUser({ role: 'instructor', first_name: 'Rosalind' });
   const member = await createUser({ role: 'member', first_name: 'Tobias' });
@@ -49,30 +35,25 @@ test('an instructor signs a member off at a paired station with badge, PIN and t
   const instructorBadge = await createBadge(db, { memberId: instructor.id, badgeSecret: badgeSecret() });
   const memberBadge = await createBadge(db, { memberId: member.id, badgeSecret: badgeSecret() });
   await withPin(db, instructor, '5930');
-  const request = await playwright.request.newContext({ baseURL });
   let stationId: string | undefined;
 
   try {
-    const api = await adminApi(request, admin);
-    const created = await api.post('/api/stations', { machineId: machine.id });
-    expect(created.status()).toBe(201);
-    const station = stationWithCodeSchema.parse(await created.json());
+    const station = await createStationAsAdmin(page.request, admin, machine.id);
     stationId = station.id;
 
-    await page.goto('/kiosk/station');
-    await expect(page.getByRole('heading', { level: 1, name: shop.name })).toBeVisible();
-    await page.getByLabel('Pairing code').fill(station.pairingCode);
+    await pairScreen(page, station.pairingCode);
 
     // Idle: the machine's nameplate and the badge outline.
     await expect(page.getByText(machine.name)).toBeVisible();
     await expect(page.getByText('Available')).toBeVisible();
-    await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
+    await expectNoWcagViolations(page);
 
     await typeBadge(page, instructorBadge.code);
     await expect(page.getByRole('heading', { name: 'Instructor menu' })).toBeVisible();
     await page.getByRole('button', { name: 'Sign off a member' }).click();
 
     await expect(page.getByRole('heading', { name: 'Rosalind, enter your PIN' })).toBeVisible();
+    await expectNoWcagViolations(page);
     const digits = page.getByRole('group', { name: 'PIN digits' });
     for (const digit of '5930') await digits.getByRole('button', { name: digit, exact: true }).click();
     await digits.getByRole('button', { name: 'OK' }).click();
@@ -84,6 +65,7 @@ test('an instructor signs a member off at a paired station with badge, PIN and t
     await page.getByRole('button', { name: training.name }).click();
 
     const continueButton = page.getByRole('button', { name: 'Continue' });
+    await expectNoWcagViolations(page);
     for (const item of training.checklist) {
       await expect(continueButton).toBeDisabled();
       await page.getByRole('checkbox', { name: item.label }).check();
@@ -106,14 +88,8 @@ test('an instructor signs a member off at a paired station with badge, PIN and t
     await page.getByRole('button', { name: 'Done' }).click();
     await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
   } finally {
-    await request.dispose();
     // The people go with the createUser fixture; what refers to them goes first.
-    const people = [admin.id, instructor.id, member.id];
-    await db('sign_offs').whereIn('member_id', people).delete();
-    await db('audit_log').whereIn('actor_id', people).orWhereIn('member_id', people).orWhere({ entity_id: stationId ?? '' }).delete();
-    if (stationId) await db('stations').where({ id: stationId }).delete();
-    await db('machines').where({ id: machine.id }).delete();
-    await db('areas').where({ id: machine.area_id }).delete();
+    await removeStationRows(db, { people: [admin.id, instructor.id, member.id], stationId, machine });
     await db('trainings').where({ id: training.id }).delete();
   }
 });

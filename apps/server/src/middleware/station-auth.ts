@@ -6,15 +6,6 @@ import { AppError } from '../lib/errors';
 import { hashToken } from '../lib/tokens';
 import { stationsRepository, type StationRecord } from '../modules/stations/stations.repository';
 
-declare global {
-  namespace Express {
-    interface Request {
-      /** The paired device that sent the request, set by requireStation. */
-      station?: StationRecord;
-    }
-  }
-}
-
 /** The cookie is sent only to the station routes, not to the rest of the API. */
 export const STATION_COOKIE_PATH = '/api/station';
 // Browsers keep a cookie at most 400 days (RFC 6265bis); the server refreshes it while in use.

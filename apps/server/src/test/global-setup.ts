@@ -1,7 +1,6 @@
 import knexFactory from 'knex';
 import { register } from 'tsx/esm/api';
 import type { TestProject } from 'vitest/node';
-import { ensureShop } from '@chuckkey/db/factories';
 import { dropDatabase, knexConfig, setupDatabase } from '@chuckkey/db';
 import { createLogger } from '../lib/logger';
 import { startMailCatcher } from '../modules/outbox/mail-catcher';
@@ -24,7 +23,8 @@ export default async function setup(project: TestProject) {
   await unregister();
 
   const db = knexFactory(knexConfig(databaseUrl, { min: 0, max: 2 }));
-  await ensureShop(db, { name: 'Test Shop', town: 'Testville', time_zone: 'UTC' });
+  // Set-up leaves a plain shop record; the tests expect their own.
+  await db('shop').where({ id: 1 }).update({ name: 'Test Shop', town: 'Testville', time_zone: 'UTC' });
   const catcher = await startMailCatcher({ db, logger: createLogger('silent'), port: 0 });
 
   project.provide('databaseUrl', databaseUrl);

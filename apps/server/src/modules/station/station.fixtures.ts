@@ -1,11 +1,13 @@
 import type { Role, StationWithCode } from '@chuckkey/core';
 import { hashPassword } from '@chuckkey/db';
 import { createBadge, createMachine, createMember, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
-import { browser, signedIn, type Browser, type TestContext } from '../../test/harness';
+import { browser, signedIn, type TestContext } from '../../test/harness';
+
+type SignedIn = Awaited<ReturnType<typeof signedIn>>;
 
 /** An admin creates a station for a new machine through the API and gets its pairing code. */
-export async function createStation(ctx: TestContext, admin?: Browser): Promise<{ admin: Browser; machine: MachineRow; station: StationWithCode }> {
-  const client = admin ?? (await signedIn(ctx, 'admin'));
+export async function createStation(ctx: TestContext): Promise<{ admin: SignedIn; machine: MachineRow; station: StationWithCode }> {
+  const client = await signedIn(ctx, 'admin');
   const machine = await createMachine(ctx.db);
   const res = await client.post('/api/stations', { machineId: machine.id });
   if (res.status !== 201) throw new Error(`station create failed: ${res.status} ${JSON.stringify(res.body)}`);

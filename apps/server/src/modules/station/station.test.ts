@@ -221,13 +221,14 @@ describe('the device credential', () => {
 describe('GET /api/station and the heartbeat', () => {
   it('tells the device its station, machine and shop', async () => {
     const { device, station, machine } = await pairedDevice(ctx);
+    const shop = await ctx.db('shop').first('name').where({ id: 1 });
     const res = await device.get('/api/station');
     expect(res.status).toBe(200);
     expect(stationSelfSchema.parse(res.body)).toEqual({
       id: station.id,
       kind: 'machine',
       name: machine.name,
-      shopName: 'Test Shop',
+      shopName: shop.name,
       machine: { id: machine.id, name: machine.name, category: machine.category, requiresPin: false },
     });
   });

@@ -1,7 +1,7 @@
-import { Html5Qrcode, Html5QrcodeSupportedFormats } from 'html5-qrcode';
+import type { Html5Qrcode } from 'html5-qrcode';
 import { useEffect, useEffectEvent, useId, useRef, useState } from 'react';
 import { Icon } from '@/components/ui/icon';
-import { READ_WIDTH, readQr } from '../utils/frame-reader';
+import type { readQr as ReadQr } from '../utils/frame-reader';
 
 type CameraStatus = 'starting' | 'running' | 'unavailable';
 
@@ -35,10 +35,10 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
     };
     // Reads the video html5-qrcode shows, for the codes its own decoder misses.
     const canvas = document.createElement('canvas');
-    const readFrame = () => {
+    const readFrame = (readQr: typeof ReadQr, readWidth: number) => {
       const video = document.getElementById(elementId)?.querySelector('video');
       if (!video || video.readyState < HTMLMediaElement.HAVE_CURRENT_DATA || !video.videoWidth) return;
-      const scale = Math.min(1, READ_WIDTH / video.videoWidth);
+      const scale = Math.min(1, readWidth / video.videoWidth);
       canvas.width = Math.round(video.videoWidth * scale);
       canvas.height = Math.round(video.videoHeight * scale);
       const context = canvas.getContext('2d', { willReadFrequently: true });
@@ -54,8 +54,14 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
         setStatus('unavailable');
         return;
       }
-      const instance = new Html5Qrcode(elementId, { verbose: false, formatsToSupport: [Html5QrcodeSupportedFormats.QR_CODE] });
       try {
+        // The readers load after the screen shows: the idle screen need not wait for them.
+        const [{ Html5Qrcode, Html5QrcodeSupportedFormats }, { readQr, READ_WIDTH }] = await Promise.all([
+          import('html5-qrcode'),
+          import('../utils/frame-reader'),
+        ]);
+        if (cancelled) return;
+        const instance = new Html5Qrcode(elementId, { verbose: false, formatsToSupport: [Html5QrcodeSupportedFormats.QR_CODE] });
         await instance.start(
           // The station's camera faces the person standing at it.
           { facingMode: 'user' },
@@ -65,10 +71,11 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
         );
         scanner = instance;
         if (cancelled) return;
-        secondReader = setInterval(readFrame, SECOND_READER_EVERY_MS);
+        secondReader = setInterval(() => readFrame(readQr, READ_WIDTH), SECOND_READER_EVERY_MS);
         setStatus('running');
       } catch {
-        // No camera, or the browser was not allowed to use it: the other ways still work.
+        // No camera, the browser was not allowed to use it, or the reader did not load: the
+        // other ways still work.
         if (!cancelled) setStatus('unavailable');
       }
     });

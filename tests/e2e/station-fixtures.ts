@@ -1,0 +1,42 @@
+import type { APIRequestContext, Page } from '@playwright/test';
+import { stationWithCodeSchema, type StationWithCode } from '@chuckkey/core';
+import type { CreatedMember } from '@chuckkey/db/factories';
+import type { Knex } from 'knex';
+import { expect } from './fixtures';
+
+export function badgeSecret(): string {
+  const secret = process.env.BADGE_SECRET;
+  if (!secret) throw new Error('BADGE_SECRET is not set: the browser tests issue badges the way the server does.');
+  return secret;
+}
+
+/**
+ * An admin creates a station for the machine through the API, signed in the way the web app
+ * signs in (CSRF token first), and signs out again: the admin's session is no part of the station.
+ */
+export async function createStationAsAdmin(request: APIRequestContext, admin: CreatedMember, machineId: string): Promise<StationWithCode> {
+  const { token } = (await (await request.get('/api/auth/csrf')).json()) as { token: string };
+  const headers = { 'x-csrf-token': token };
+  expect((await request.post('/api/auth/login', { headers, data: { email: admin.email, password: admin.password } })).status()).toBe(200);
+  const created = await request.post('/api/stations', { headers, data: { machineId } });
+  expect(created.status()).toBe(201);
+  const station = stationWithCodeSchema.parse(await created.json());
+  expect((await request.post('/api/auth/logout', { headers })).status()).toBe(204);
+  return station;
+}
+
+/** Opens the station screen and types the pairing code; the idle screen follows. */
+export async function pairScreen(page: Page, pairingCode: string): Promise<void> {
+  await page.goto('/kiosk/station');
+  await page.getByLabel('Pairing code').fill(pairingCode);
+  await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
+}
+
+/** What the station tests leave behind that refers to their people, machine and station. */
+export async function removeStationRows(db: Knex, rows: { people: string[]; stationId?: string | undefined; machine: { id: string; area_id: string } }) {
+  await db('sign_offs').whereIn('member_id', rows.people).delete();
+  await db('audit_log').whereIn('actor_id', rows.people).orWhereIn('member_id', rows.people).orWhere({ entity_id: rows.stationId ?? '' }).delete();
+  if (rows.stationId) await db('stations').where({ id: rows.stationId }).delete();
+  await db('machines').where({ id: rows.machine.id }).delete();
+  await db('areas').where({ id: rows.machine.area_id }).delete();
+}
