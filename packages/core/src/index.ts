@@ -10,3 +10,4 @@ export * from './badges/schemas';
 export * from './waivers/schemas';
 export * from './audit/schemas';
 export * from './stations/schemas';
+export * from './clearance/clearance';
