@@ -1,4 +1,5 @@
 import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { cn } from './cn';
 
 interface DialogProps {
   open: boolean;
@@ -6,6 +7,8 @@ interface DialogProps {
   description?: ReactNode;
   /** While a change is being saved, Escape does not close the dialog halfway through. */
   busy?: boolean;
+  /** A yes-or-no question needs less room than a form. */
+  size?: 'form' | 'question';
   onClose: () => void;
   children: ReactNode;
 }
@@ -14,7 +17,15 @@ interface DialogProps {
  * A native modal dialog for a small form: the browser keeps focus inside it, closes it on
  * Escape and returns focus to the control that opened it.
  */
-export function Dialog({ open, title, description, busy = false, onClose, children }: DialogProps) {
+export function Dialog({
+  open,
+  title,
+  description,
+  busy = false,
+  size = 'form',
+  onClose,
+  children,
+}: DialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   const descriptionId = useId();
@@ -35,7 +46,10 @@ export function Dialog({ open, title, description, busy = false, onClose, childr
         event.preventDefault();
         if (!busy) onClose();
       }}
-      className="m-auto w-[min(34rem,calc(100vw-2rem))] rounded-lg bg-white p-0 text-neutral-900 shadow-xl backdrop:bg-neutral-900/50"
+      className={cn(
+        'm-auto rounded-lg bg-white p-0 text-neutral-900 shadow-xl backdrop:bg-neutral-900/50',
+        size === 'form' ? 'w-[min(34rem,calc(100vw-2rem))]' : 'w-[min(32rem,calc(100vw-2rem))]',
+      )}
     >
       <div className="flex flex-col gap-4 p-5">
         <h2 id={titleId} className="text-xl font-bold">

@@ -1,10 +1,10 @@
-import { PASSWORD_MIN, passwordResetConfirmSchema } from '@chuckkey/core';
+import { passwordResetConfirmSchema } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { NewPasswordFields } from '../../../components/new-password-fields';
 import { Alert } from '../../../components/ui/alert';
 import { Button, ButtonLink } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
@@ -63,20 +63,11 @@ export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
       {formError && <Alert tone="error">{formError}</Alert>}
-      <TextField
-        label="New password"
-        hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
-        type="password"
-        autoComplete="new-password"
-        error={errors.password?.message}
-        {...register('password')}
-      />
-      <TextField
-        label="Confirm new password"
-        type="password"
-        autoComplete="new-password"
-        error={errors.confirmPassword?.message}
-        {...register('confirmPassword')}
+      <NewPasswordFields
+        password={register('password')}
+        confirm={register('confirmPassword')}
+        passwordError={errors.password?.message}
+        confirmError={errors.confirmPassword?.message}
       />
       <Button type="submit" pending={confirmReset.isPending} className="w-full">
         Set new password

@@ -1,12 +1,12 @@
 import { PHOTO_MAX_BYTES } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { MemberPhoto } from '../../../components/member-photo';
+import { FileField, UploadProgress } from '../../../components/upload-field';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { FieldShell, controlClasses, describedBy, useFieldIds } from '../../../components/ui/field';
 import { Panel } from '../../../components/ui/panel';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { formatMegabytes, readAsDataUrl, refusedUploadMessage, uploadFileSchema } from '../../../lib/upload-file';
@@ -26,8 +26,6 @@ const formSchema = z.object({ photo: uploadFileSchema(rules) });
 
 export function PhotoPanel({ memberId, name }: { memberId: string; name: string }) {
   const upload = useUploadPhoto();
-  const ids = useFieldIds();
-  const progressId = useId();
   const [preview, setPreview] = useState<string | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
@@ -85,36 +83,25 @@ export function PhotoPanel({ memberId, name }: { memberId: string; name: string 
           control={control}
           name="photo"
           render={({ field }) => (
-            <FieldShell ids={ids} label="Choose a photo" hint={hint} error={errors.photo?.message}>
-              <input
-                key={version}
-                ref={field.ref}
-                id={ids.control}
-                name={field.name}
-                type="file"
-                accept="image/jpeg,image/png"
-                onBlur={field.onBlur}
-                onChange={(event) => {
-                  const file = event.target.files?.[0];
-                  field.onChange(file);
-                  setSaved(false);
-                  setPreview(null);
-                  if (file && file.type.startsWith('image/')) readAsDataUrl(file).then(setPreview, () => setPreview(null));
-                }}
-                className={`${controlClasses} file:mr-3 file:min-h-9 file:rounded-md file:border file:border-neutral-500 file:bg-neutral-100 file:px-3 file:font-bold`}
-                {...describedBy(ids, hint, errors.photo?.message)}
-              />
-            </FieldShell>
+            <FileField
+              key={version}
+              ref={field.ref}
+              name={field.name}
+              onBlur={field.onBlur}
+              label="Choose a photo"
+              hint={hint}
+              error={errors.photo?.message}
+              accept="image/jpeg,image/png"
+              onFile={(file) => {
+                field.onChange(file);
+                setSaved(false);
+                setPreview(null);
+                if (file && file.type.startsWith('image/')) readAsDataUrl(file).then(setPreview, () => setPreview(null));
+              }}
+            />
           )}
         />
-        {progress !== null && (
-          <div className="flex flex-col gap-1">
-            <label htmlFor={progressId} className="text-sm font-bold text-neutral-900">
-              Uploading… {Math.round(progress * 100)} %
-            </label>
-            <progress id={progressId} max={1} value={progress} className="h-3 w-full accent-brand" />
-          </div>
-        )}
+        <UploadProgress progress={progress} />
         <div>
           <Button type="submit" pending={upload.isPending}>
             Upload photo

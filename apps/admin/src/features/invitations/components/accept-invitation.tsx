@@ -1,12 +1,12 @@
-import { PASSWORD_MIN, fullName, invitationAcceptSchema, type InvitationPreview, type User } from '@chuckkey/core';
+import { fullName, invitationAcceptSchema, type InvitationPreview, type User } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { NewPasswordFields } from '../../../components/new-password-fields';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
-import { TextField } from '../../../components/ui/text-field';
 import { ApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
@@ -70,20 +70,12 @@ function AcceptForm({ token, preview, onAccepted }: AcceptFormProps) {
         <dt className="font-bold text-neutral-900">Your e-mail</dt>
         <dd className="break-all text-neutral-800">{preview.email}</dd>
       </dl>
-      <TextField
-        label="Password"
-        hint={`Choose one of at least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
-        type="password"
-        autoComplete="new-password"
-        error={errors.password?.message}
-        {...register('password')}
-      />
-      <TextField
-        label="Confirm password"
-        type="password"
-        autoComplete="new-password"
-        error={errors.confirmPassword?.message}
-        {...register('confirmPassword')}
+      <NewPasswordFields
+        first
+        password={register('password')}
+        confirm={register('confirmPassword')}
+        passwordError={errors.password?.message}
+        confirmError={errors.confirmPassword?.message}
       />
       <Button type="submit" pending={accept.isPending} className="w-full">
         Join the shop

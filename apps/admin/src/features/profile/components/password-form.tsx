@@ -1,7 +1,8 @@
-import { PASSWORD_MIN, passwordChangeSchema } from '@chuckkey/core';
+import { passwordChangeSchema } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { NewPasswordFields } from '../../../components/new-password-fields';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
@@ -60,20 +61,11 @@ export function PasswordForm() {
           error={errors.currentPassword?.message}
           {...register('currentPassword')}
         />
-        <TextField
-          label="New password"
-          hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
-          type="password"
-          autoComplete="new-password"
-          error={errors.newPassword?.message}
-          {...register('newPassword')}
-        />
-        <TextField
-          label="Confirm new password"
-          type="password"
-          autoComplete="new-password"
-          error={errors.confirmNewPassword?.message}
-          {...register('confirmNewPassword')}
+        <NewPasswordFields
+          password={register('newPassword')}
+          confirm={register('confirmNewPassword')}
+          passwordError={errors.newPassword?.message}
+          confirmError={errors.confirmNewPassword?.message}
         />
         <div>
           <Button type="submit" pending={changePassword.isPending}>

@@ -1,11 +1,11 @@
 import { WAIVER_SCAN_MAX_BYTES } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
+import { FileField, UploadProgress } from '../../../components/upload-field';
 import { Button } from '../../../components/ui/button';
-import { FieldShell, controlClasses, describedBy, useFieldIds } from '../../../components/ui/field';
 import { CheckIcon, WarningIcon } from '../../../components/ui/icons';
 import { Panel } from '../../../components/ui/panel';
 import { QueryError } from '../../../components/ui/query-error';
@@ -32,8 +32,6 @@ const formSchema = z.object({ scan: uploadFileSchema(rules) });
 
 function ScanForm({ memberId, version }: { memberId: string; version: number }) {
   const upload = useUploadWaiverScan();
-  const ids = useFieldIds();
-  const progressId = useId();
   const [progress, setProgress] = useState<number | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const {
@@ -65,29 +63,19 @@ function ScanForm({ memberId, version }: { memberId: string; version: number }) 
         control={control}
         name="scan"
         render={({ field }) => (
-          <FieldShell ids={ids} label="Signed waiver scan" hint={hint} error={errors.scan?.message}>
-            <input
-              ref={field.ref}
-              id={ids.control}
-              name={field.name}
-              type="file"
-              accept="application/pdf,image/jpeg,image/png"
-              onBlur={field.onBlur}
-              onChange={(event) => field.onChange(event.target.files?.[0])}
-              className={`${controlClasses} file:mr-3 file:min-h-9 file:rounded-md file:border file:border-neutral-500 file:bg-neutral-100 file:px-3 file:font-bold`}
-              {...describedBy(ids, hint, errors.scan?.message)}
-            />
-          </FieldShell>
+          <FileField
+            ref={field.ref}
+            name={field.name}
+            onBlur={field.onBlur}
+            label="Signed waiver scan"
+            hint={hint}
+            error={errors.scan?.message}
+            accept="application/pdf,image/jpeg,image/png"
+            onFile={field.onChange}
+          />
         )}
       />
-      {progress !== null && (
-        <div className="flex flex-col gap-1">
-          <label htmlFor={progressId} className="text-sm font-bold text-neutral-900">
-            Uploading… {Math.round(progress * 100)} %
-          </label>
-          <progress id={progressId} max={1} value={progress} className="h-3 w-full accent-brand" />
-        </div>
-      )}
+      <UploadProgress progress={progress} />
       <div>
         <Button type="submit" pending={upload.isPending}>
           Upload signed waiver

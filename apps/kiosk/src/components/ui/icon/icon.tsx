@@ -1,6 +1,20 @@
 import type { ReactNode } from 'react';
 
-export type IconName = 'badge' | 'keyboard' | 'camera-off' | 'check' | 'cross' | 'warning' | 'person' | 'wrench' | 'back' | 'link' | 'hourglass';
+export type IconName =
+  | 'badge'
+  | 'keyboard'
+  | 'camera-off'
+  | 'check'
+  | 'cross'
+  | 'warning'
+  | 'person'
+  | 'wrench'
+  | 'back'
+  | 'link'
+  | 'hourglass'
+  | 'chuck'
+  | 'padlock'
+  | 'unplugged';
 
 const shapes: Record<IconName, ReactNode> = {
   badge: (
@@ -40,6 +54,21 @@ const shapes: Record<IconName, ReactNode> = {
   back: <path d="M15 5l-7 7 7 7" />,
   link: <path d="M10 14a4 4 0 0 0 5.7 0l3-3a4 4 0 0 0-5.7-5.7l-1 1M14 10a4 4 0 0 0-5.7 0l-3 3a4 4 0 0 0 5.7 5.7l1-1" />,
   hourglass: <path d="M6 3h12M6 21h12M8 3c0 5 8 5 8 9s-8 4-8 9M16 3c0 5-8 5-8 9s8 4 8 9" />,
+  // A three-jaw chuck seen from the tailstock: the spindle is turning.
+  chuck: (
+    <>
+      <circle cx="12" cy="12" r="9" />
+      <circle cx="12" cy="12" r="2.5" />
+      <path d="M12 3v5.5M19.8 16.5l-4.8-2.8M4.2 16.5l4.8-2.8" />
+    </>
+  ),
+  padlock: (
+    <>
+      <rect x="5" y="11" width="14" height="10" rx="1.5" />
+      <path d="M8 11V8a4 4 0 0 1 8 0v3M12 15v2.5" />
+    </>
+  ),
+  unplugged: <path d="M9 2.5v4M15 2.5v4M7 6.5h10v4a5 5 0 0 1-10 0zM12 15.5V21M3 3l18 18" />,
 };
 
 /** Line icons beside the words of a state, never instead of them. */

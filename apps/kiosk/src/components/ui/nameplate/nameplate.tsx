@@ -1,4 +1,4 @@
-import { NameplateIcon } from './nameplate-icon';
+import { Icon } from '../icon';
 import { nameplateLook, nameplateSize, type NameplateSize, type NameplateState } from './nameplate-looks';
 
 export interface NameplateProps {
@@ -27,7 +27,7 @@ export function Nameplate({ name, state, detail, size = 'md', className }: Namep
       </div>
       <div className={`flex min-w-0 flex-col ${sized.body}`}>
         <p className={`flex items-center leading-tight font-bold ${sized.state}`}>
-          <NameplateIcon name={look.icon} className={sized.icon} />
+          <Icon name={look.icon} className={sized.icon} />
           <span>{look.label}</span>
         </p>
         <p className={`truncate ${sized.detail}`}>{detail}</p>
