@@ -11,3 +11,4 @@ export * from './waivers/schemas';
 export * from './audit/schemas';
 export * from './stations/schemas';
 export * from './clearance/clearance';
+export * from './stations/check-in';

@@ -4,7 +4,7 @@ import type { Deps } from '../lib/deps';
 import { createLogger } from '../lib/logger';
 import { createMailer, type Mailer } from '../lib/mailer';
 import { createTestContext, type TestContext } from '../test/harness';
-import { SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, startJobs } from './jobs';
+import { SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, SILENT_STATIONS, SILENT_STATIONS_CRON, startJobs } from './jobs';
 
 let ctx: TestContext;
 let mailer: Mailer;
@@ -34,6 +34,7 @@ describe('background jobs on pg-boss', () => {
     try {
       const schedules = await jobs.boss.getSchedules();
       expect(schedules).toContainEqual(expect.objectContaining({ name: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timezone: 'UTC' }));
+      expect(schedules).toContainEqual(expect.objectContaining({ name: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }));
 
       const id = await jobs.boss.send(SIGN_OFF_REMINDERS, {});
       expect(id).not.toBeNull();

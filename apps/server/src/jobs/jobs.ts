@@ -1,5 +1,6 @@
 import PgBoss from 'pg-boss';
 import type { Deps } from '../lib/deps';
+import { machineSessionsService } from '../modules/machine-sessions/machine-sessions.service';
 import { shopRepository } from '../modules/shop/shop.repository';
 import { signOffRemindersService } from '../modules/sign-offs/reminders.service';
 
@@ -11,6 +12,14 @@ export const SIGN_OFF_REMINDERS = 'sign-off-reminders';
  * in the database, so repeated runs never send twice.
  */
 export const SIGN_OFF_REMINDERS_CRON = '0 8-20 * * *';
+
+export const SILENT_STATIONS = 'silent-stations';
+
+/**
+ * Every minute: a station silent for three minutes gets its running session closed at its last
+ * heartbeat. Closing is one statement on sessions still running, so a repeated run changes nothing.
+ */
+export const SILENT_STATIONS_CRON = '* * * * *';
 
 export interface Jobs {
   boss: PgBoss;
@@ -35,12 +44,20 @@ export async function startJobs(deps: Deps, options: { schema?: string } = {}): 
   await boss.work(SIGN_OFF_REMINDERS, async () => {
     await reminders.sendDue(new Date());
   });
+  const sessions = machineSessionsService(deps);
+  await boss.createQueue(SILENT_STATIONS);
+  await boss.schedule(SILENT_STATIONS, SILENT_STATIONS_CRON, {});
+  await boss.work(SILENT_STATIONS, async () => {
+    const closed = await sessions.closeSilentSessions(new Date());
+    if (closed.length > 0) logger.info({ sessions: closed.map((s) => s.id) }, 'sessions of silent stations closed');
+  });
+  logger.info({ queue: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }, 'background jobs started');
   logger.info({ queue: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timeZone }, 'background jobs started');
 
   return {
     boss,
     async stop() {
-      // Lets a reminder run in progress finish, then closes pg-boss's own connections.
+      // Lets a job run in progress finish, then closes pg-boss's own connections.
       await boss.stop({ graceful: true, wait: true, timeout: 20_000 });
     },
   };

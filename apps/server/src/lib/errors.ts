@@ -7,7 +7,14 @@ export class AppError extends Error {
     readonly status: number,
     readonly code: string,
     message: string,
-    readonly options: { errors?: Record<string, string[]>; title?: string; operational?: boolean; headers?: Record<string, string> } = {},
+    readonly options: {
+      errors?: Record<string, string[]>;
+      title?: string;
+      operational?: boolean;
+      headers?: Record<string, string>;
+      /** Further members of the problem details (RFC 9457 §3.2), e.g. the reasons a start was refused. */
+      extensions?: Record<string, unknown>;
+    } = {},
   ) {
     super(message);
     this.name = 'AppError';

@@ -54,7 +54,7 @@ export const problemHandler: ErrorRequestHandler = (err: unknown, req, res, next
   }
   if (err instanceof AppError && err.operational) {
     for (const [name, value] of Object.entries(err.options.headers ?? {})) res.setHeader(name, value);
-    send(res, problem(err.status, err.code, err.message, err.options.errors, err.options.title));
+    send(res, { ...err.options.extensions, ...problem(err.status, err.code, err.message, err.options.errors, err.options.title) });
     return;
   }
   const bodyParserType = typeof err === 'object' && err !== null && 'type' in err ? String(err.type) : '';

@@ -1,10 +1,28 @@
 import { Router } from 'express';
-import { pairSchema, stationInstructorSchema, stationMemberLookupSchema, stationSignOffSchema } from '@chuckkey/core';
+import { rateLimit } from 'express-rate-limit';
+import {
+  pairSchema,
+  sessionEndSchema,
+  sessionStartSchema,
+  stationDutySchema,
+  stationInstructorSchema,
+  stationMemberLookupSchema,
+  stationScanSchema,
+  stationSignOffSchema,
+} from '@chuckkey/core';
+import { z } from 'zod';
 import type { Deps } from '../../lib/deps';
 import { perAddressLimit } from '../../lib/rate-limit';
+import { AppError } from '../../lib/errors';
 import { parse } from '../../lib/validate';
 import { currentStation, requireStation, setStationCookie } from '../../middleware/station-auth';
+import { machineSessionsService } from '../machine-sessions/machine-sessions.service';
 import { stationService } from './station.service';
+
+/** Scans one station may send a minute: far above a queue of people, well below a stuck scanner. */
+export const SCANS_PER_MINUTE = 60;
+
+const sessionParams = z.object({ id: z.uuid({ error: 'Not a session id.' }) });
 
 /**
  * What a paired device may do. These routes keep CSRF protection like the rest of the API: the
@@ -12,6 +30,16 @@ import { stationService } from './station.service';
  */
 export function stationRoutes(deps: Deps): Router {
   const service = stationService(deps);
+  const sessions = machineSessionsService(deps);
+  // Counted per station, not per address: several stations may share one address behind the shop's router.
+  const scanLimit = rateLimit({
+    windowMs: 60_000,
+    limit: SCANS_PER_MINUTE,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: (req) => currentStation(req).id,
+    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', 'Too many scans at this station. Wait a minute and try again.')),
+  });
   const router = Router();
 
   // Per process, in memory: about 40 bits of code, 10 minutes of life and 10 wrong tries per
@@ -48,6 +76,31 @@ export function stationRoutes(deps: Deps): Router {
   router.post('/sign-offs', async (req, res) => {
     const input = parse(stationSignOffSchema, req.body, 'body');
     res.status(201).json(await service.signOff(currentStation(req), input));
+  });
+
+  router.post('/scan', scanLimit, async (req, res) => {
+    const { badge } = parse(stationScanSchema, req.body, 'body');
+    res.json(await sessions.scan(currentStation(req), badge, new Date()));
+  });
+
+  router.get('/state', async (req, res) => {
+    res.json(await sessions.state(currentStation(req)));
+  });
+
+  router.post('/sessions', async (req, res) => {
+    const input = parse(sessionStartSchema, req.body, 'body');
+    res.status(201).json(await sessions.start(currentStation(req), input, new Date()));
+  });
+
+  router.post('/sessions/:id/end', async (req, res) => {
+    const { id } = parse(sessionParams, req.params, 'params');
+    const input = parse(sessionEndSchema, req.body, 'body');
+    res.json(await sessions.end(currentStation(req), id, input, new Date()));
+  });
+
+  router.post('/duty', async (req, res) => {
+    const { badge, pin } = parse(stationDutySchema, req.body, 'body');
+    res.json(await service.duty(currentStation(req), badge, pin));
   });
 
   return router;

@@ -1,5 +1,6 @@
 import type {
   SignOff,
+  StationDutyResult,
   StationInstructorResult,
   StationMemberLookupResult,
   StationSelf,
@@ -10,6 +11,7 @@ import { AppError, badRequest, notFound } from '../../lib/errors';
 import { hashToken, randomToken } from '../../lib/tokens';
 import { auditLog } from '../audit/audit.repository';
 import { badgesService } from '../badges/badges.service';
+import { dutyService } from '../duty/duty.service';
 import { membersRepository, toUser } from '../members/members.repository';
 import { shopRepository } from '../shop/shop.repository';
 import { signOffsService } from '../sign-offs/sign-offs.service';
@@ -104,6 +106,12 @@ export function stationService(deps: Deps) {
       if (!holder) return { member: null, reason: 'unknown_badge' };
       if (!holder.active) return { member: null, reason: 'member_inactive' };
       return { member: { id: holder.id, firstName: holder.firstName, role: holder.role } };
+    },
+
+    /** An instructor or admin goes on duty, or off it, with their badge and PIN. */
+    async duty(station: StationRecord, badge: string, pin: string): Promise<StationDutyResult> {
+      const supervisor = await verifyInstructor(station, badge, pin);
+      return dutyService(deps).toggle(supervisor);
     },
 
     /** The instructor's badge and PIN are checked again: the station keeps no signed-in person. */

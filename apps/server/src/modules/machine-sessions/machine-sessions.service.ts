@@ -1,0 +1,223 @@
+import {
+  badgeCodeSchema,
+  evaluateClearance,
+  HEARTBEAT_SILENCE_MINUTES,
+  OFFLINE_END_MAX_HOURS,
+  unknownBadgeReason,
+  type ClearanceFacts,
+  type SessionEnd,
+  type SessionEnded,
+  type SessionStart,
+  type SessionStarted,
+  type StationScanResult,
+  type StationState,
+} from '@chuckkey/core';
+import { badgeCodeHash } from '@chuckkey/db';
+import type { Deps } from '../../lib/deps';
+import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
+import { badgesService } from '../badges/badges.service';
+import type { StationRecord } from '../stations/stations.repository';
+import { machineSessionsRepository, type EndedBy, type ScanFacts, type SessionRecord } from './machine-sessions.repository';
+
+const SUPERVISING_ROLES = new Set(['instructor', 'admin']);
+const HOUR_MS = 3_600_000;
+/** A station's clock may run a little ahead of the server's; an end "from the future" within this is taken as now. */
+const CLOCK_SKEW_MS = 60_000;
+
+/**
+ * Whether the shop is open is part of every decision. Opening hours and closures are not kept yet
+ * (the hours setting arrives later), so the shop counts as open at all times until then.
+ */
+export function shopHoursAt(_now: Date): ClearanceFacts['shopHours'] {
+  return { open: true };
+}
+
+export const notAMachineStation = () =>
+  new AppError(403, 'not_a_machine_station', 'This station is not at a machine. Badges are scanned for machine work at the machine’s own station.');
+
+export const machineInUse = () =>
+  conflict('machine_in_use', 'Someone else started a session on this machine a moment ago. Scan again to see who.');
+
+function machineOf(station: StationRecord): string {
+  if (station.kind !== 'machine' || !station.machineId) throw notAMachineStation();
+  return station.machineId;
+}
+
+/** The badge's hash, or null for text that cannot be a badge code (it then finds no one). */
+function hashOf(badge: string): string | null {
+  const parsed = badgeCodeSchema.safeParse(badge);
+  return parsed.success ? badgeCodeHash(parsed.data) : null;
+}
+
+/**
+ * The tag-out, maintenance, reservation, crib and balance facts are empty because the shop keeps
+ * none of those records yet; the rules for them are already in the decision.
+ */
+function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['member']> }, timeZone: string, now: Date): ClearanceFacts {
+  return {
+    timeZone,
+    member: facts.member,
+    machine: {
+      id: facts.machine.id,
+      name: facts.machine.name,
+      requiredTrainings: facts.requiredTrainings.map((t) => ({ id: t.id, name: t.name, teachers: t.teachers, nextClass: null })),
+      taggedOut: null,
+      overdueBlockingTasks: [],
+    },
+    signOffs: facts.signOffs,
+    supervisorOnDuty: facts.supervisorOnDuty,
+    runningSession: facts.runningSession,
+    upcomingReservations: [],
+    shopHours: shopHoursAt(now),
+    policies: { overdueCheckoutBlockDays: null, overdueCheckouts: [], balanceLimitCents: null, balanceCents: 0 },
+  };
+}
+
+const toEnded = (session: SessionRecord): SessionEnded => ({
+  id: session.id,
+  startedAt: session.startedAt.toISOString(),
+  endedAt: (session.endedAt ?? new Date()).toISOString(),
+  hours: session.hours ?? 0,
+});
+
+export function machineSessionsService(deps: Deps) {
+  const { db } = deps;
+  const sessions = machineSessionsRepository(db);
+  const badges = badgesService(deps);
+
+  async function load(machineId: string, codeHash: string | null): Promise<ScanFacts> {
+    const facts = await sessions.facts(machineId, codeHash);
+    if (!facts) throw notFound('machine_not_found', 'This station’s machine no longer exists. An admin can set the station up again.');
+    return facts;
+  }
+
+  async function decide(station: StationRecord, badge: string, now: Date) {
+    const facts = await load(machineOf(station), hashOf(badge));
+    if (!facts.member) return { facts, member: null, decision: null };
+    const decision = evaluateClearance(clearanceFacts({ ...facts, member: facts.member }, facts.timeZone, now), now);
+    return { facts, member: facts.member, decision };
+  }
+
+  return {
+    async scan(station: StationRecord, badge: string, now: Date): Promise<StationScanResult> {
+      const { facts, member, decision } = await decide(station, badge, now);
+      const running = facts.runningSession;
+      const common = {
+        requiresPin: facts.machine.requiresPin,
+        safetyChecklist: facts.machine.safetyChecklist,
+      };
+      if (!member || !decision) {
+        return {
+          member: null,
+          cleared: false,
+          reasons: [unknownBadgeReason],
+          rungs: [],
+          canSupervise: false,
+          runningSession: running ? { id: running.id, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString(), own: false } : null,
+          ...common,
+        };
+      }
+      return {
+        // The station has no route for photos yet, so it is told there is none to show.
+        member: { id: member.id, firstName: member.firstName, role: member.role, hasPhoto: false },
+        cleared: decision.cleared,
+        reasons: decision.reasons,
+        rungs: decision.rungs,
+        canSupervise: member.active && SUPERVISING_ROLES.has(member.role),
+        runningSession: running
+          ? { id: running.id, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString(), own: running.memberId === member.id }
+          : null,
+        ...common,
+      };
+    },
+
+    async start(station: StationRecord, input: SessionStart, now: Date): Promise<SessionStarted> {
+      const { facts, member, decision } = await decide(station, input.badge, now);
+      if (!member || !decision) {
+        throw new AppError(409, 'not_cleared', unknownBadgeReason.message, { extensions: { reasons: [unknownBadgeReason] } });
+      }
+      if (!decision.cleared) {
+        throw new AppError(409, 'not_cleared', decision.reasons.map((r) => r.message).join(' '), { extensions: { reasons: decision.reasons } });
+      }
+      const confirmed = new Set(input.checklist);
+      const missing = facts.machine.safetyChecklist.filter((item) => !confirmed.has(item.id));
+      if (missing.length > 0) {
+        throw badRequest('checklist_incomplete', 'Confirm every safety item before you start.', { checklist: missing.map((item) => item.label) });
+      }
+      if (facts.machine.requiresPin && !(input.pin && (await badges.verifyPin(member.id, input.pin)))) {
+        throw new AppError(401, 'wrong_pin', 'That PIN is not right. Try again.');
+      }
+      try {
+        const session = await sessions.start({
+          machineId: facts.machine.id,
+          memberId: member.id,
+          stationId: station.id,
+          checklist: facts.machine.safetyChecklist,
+        });
+        return { id: session.id, startedAt: session.startedAt.toISOString(), member: { id: member.id, firstName: member.firstName } };
+      } catch (error) {
+        if (pgCode(error) === UNIQUE_VIOLATION) throw machineInUse();
+        throw error;
+      }
+    },
+
+    async end(station: StationRecord, sessionId: string, input: SessionEnd, now: Date): Promise<SessionEnded> {
+      const machineId = machineOf(station);
+      // Who holds the badge is settled before the transaction: it reads another table and hashes nothing slow.
+      const holder = input.badge ? await badges.findMemberByCode(input.badge) : null;
+      return db.transaction(async (trx) => {
+        const repo = machineSessionsRepository(trx);
+        const session = await repo.findForUpdate(sessionId);
+        if (!session || session.machineId !== machineId) throw notFound('session_not_found', 'There is no such session on this machine.');
+        if (session.endIdempotencyKey === input.idempotencyKey) return toEnded(session);
+        if (session.endedAt) throw conflict('already_ended', 'This session has already ended.');
+        if (await repo.findByEndKey(input.idempotencyKey)) {
+          throw conflict('idempotency_key_reused', 'That idempotency key already ended another session. Send a new key for each end.');
+        }
+
+        let endedBy: EndedBy = 'member';
+        if (input.badge) {
+          if (holder?.id === session.memberId) endedBy = 'member';
+          else if (holder && holder.active && SUPERVISING_ROLES.has(holder.role)) endedBy = holder.role === 'admin' ? 'admin' : 'supervisor';
+          else throw new AppError(403, 'not_allowed', 'Only the member on the machine or a supervisor can end this session.');
+        }
+
+        const endedAt = input.endedAt ? new Date(input.endedAt) : now;
+        if (endedAt.getTime() > now.getTime() + CLOCK_SKEW_MS) {
+          throw badRequest('invalid_end_time', 'The end time is in the future.', { endedAt: ['The end time is in the future.'] });
+        }
+        if (endedAt.getTime() < session.startedAt.getTime()) {
+          throw badRequest('invalid_end_time', 'The end time is before the session started.', { endedAt: ['The end time is before the start.'] });
+        }
+        if (now.getTime() - endedAt.getTime() > OFFLINE_END_MAX_HOURS * HOUR_MS) {
+          throw badRequest('invalid_end_time', `An end time more than ${OFFLINE_END_MAX_HOURS} hours old is not taken. Ask an admin to correct the session.`, {
+            endedAt: [`More than ${OFFLINE_END_MAX_HOURS} hours ago.`],
+          });
+        }
+        const clamped = endedAt.getTime() > now.getTime() ? now : endedAt;
+        return toEnded(await repo.end(session.id, { endedAt: clamped, endedBy, idempotencyKey: input.idempotencyKey }));
+      });
+    },
+
+    async state(station: StationRecord): Promise<StationState> {
+      const facts = await load(machineOf(station), null);
+      const running = facts.runningSession;
+      return {
+        machine: { id: facts.machine.id, name: facts.machine.name, category: facts.machine.category, requiresPin: facts.machine.requiresPin },
+        runningSession: running
+          ? { id: running.id, memberId: running.memberId, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString() }
+          : null,
+        supervisorOnDuty: facts.supervisorOnDuty,
+      };
+    },
+
+    /**
+     * Ends the sessions of stations silent for HEARTBEAT_SILENCE_MINUTES before `now`, at their last
+     * contact: the member most likely stopped then, and the meter should not count the silence.
+     */
+    async closeSilentSessions(now: Date): Promise<{ id: string; endedAt: Date }[]> {
+      return sessions.closeSilent(new Date(now.getTime() - HEARTBEAT_SILENCE_MINUTES * 60_000));
+    },
+  };
+}
+export type MachineSessionsService = ReturnType<typeof machineSessionsService>;

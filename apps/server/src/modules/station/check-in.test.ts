@@ -1,0 +1,375 @@
+import { randomUUID } from 'node:crypto';
+import { register } from 'tsx/esm/api';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { sessionEndedSchema, sessionStartedSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
+import { dropDatabase, setupDatabase } from '@chuckkey/db';
+import { createSignOff, createTraining, createWaiverVersion, recordWaiver } from '@chuckkey/db/factories';
+import type { Deps } from '../../lib/deps';
+import { createLogger } from '../../lib/logger';
+import { createMailer } from '../../lib/mailer';
+import { machineSessionsService } from '../machine-sessions/machine-sessions.service';
+import { browser, createTestContext, type TestContext } from '../../test/harness';
+import { badgeHolder, pairedDevice, type BadgeHolder } from './station.fixtures';
+import { SCANS_PER_MINUTE } from './station.routes';
+
+let ctx: TestContext;
+let deps: Deps;
+beforeAll(async () => {
+  // Clearance needs a published waiver, and waiver versions are shop-wide: publishing one in the
+  // shared test database would change what the waiver tests, running beside these, start from.
+  // So these tests get a database of their own, migrated like the shared one.
+  const url = new URL(inject('databaseUrl'));
+  url.pathname = `${url.pathname}_check_in`;
+  const unregister = register();
+  await dropDatabase(url.toString());
+  await setupDatabase(url.toString(), { seed: false });
+  await unregister();
+  ctx = createTestContext({ DATABASE_URL: url.toString() });
+  const logger = createLogger('silent');
+  deps = { config: ctx.config, db: ctx.db, logger, mailer: createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger) };
+  // Every member below must have accepted the newest waiver version to be cleared.
+  await createWaiverVersion(ctx.db);
+});
+afterAll(async () => {
+  deps.mailer.close();
+  await ctx.close();
+});
+
+const HOUR = 3_600_000;
+const SAFETY = [
+  { id: 'chuck-key-out', label: 'The chuck key is out of the chuck' },
+  { id: 'guards-closed', label: 'The chuck guard is closed' },
+  { id: 'eyes-protected', label: 'I am wearing safety glasses' },
+];
+const ALL_ITEMS = SAFETY.map((item) => item.id);
+
+async function waiverOnFile(holder: BadgeHolder): Promise<void> {
+  const current = await ctx.db('waiver_versions').max<{ max: number }>({ max: 'version' }).first();
+  await recordWaiver(ctx.db, { memberId: holder.member.id, version: Number(current?.max) });
+}
+
+/** A paired lathe station needing one training, with a safety checklist, and a member signed off on it. */
+async function arrange(options: { level?: 'independent' | 'supervised'; requiresPin?: boolean } = {}) {
+  const paired = await pairedDevice(ctx);
+  await ctx.db('machines').where({ id: paired.machine.id }).update({ safety_checklist: JSON.stringify(SAFETY), requires_pin: options.requiresPin ?? false });
+  const training = await createTraining(ctx.db, { name: `Lathe basics ${randomUUID().slice(0, 6)}`, machine_ids: [paired.machine.id] });
+  const teacher = await badgeHolder(ctx, 'instructor', { firstName: 'Bettina' });
+  const member = await badgeHolder(ctx, 'member', { firstName: 'Ines' });
+  await waiverOnFile(member);
+  await createSignOff(ctx.db, { member_id: member.member.id, training_id: training.id, signed_by: teacher.member.id, level: options.level ?? 'independent' });
+  return { ...paired, training, teacher, member };
+}
+
+async function start(device: Awaited<ReturnType<typeof arrange>>['device'], holder: BadgeHolder, extra: object = {}) {
+  return device.post('/api/station/sessions', { badge: holder.badge, checklist: ALL_ITEMS, ...extra });
+}
+
+/** Ends any open duty shifts so that the supervision rule is tested from a known state. */
+async function nobodyOnDuty() {
+  await ctx.db('duty_shifts').whereNull('ended_at').update({ ended_at: ctx.db.fn.now() });
+}
+
+describe('POST /api/station/scan', () => {
+  it('a badge no one holds answers 200 unknown_badge and names no member', async () => {
+    const { device } = await arrange();
+    const res = await device.post('/api/station/scan', { badge: 'q'.repeat(22) });
+    expect(res.status).toBe(200);
+    const body = stationScanResultSchema.parse(res.body);
+    expect(body).toMatchObject({ member: null, cleared: false, canSupervise: false });
+    expect(body.reasons.map((r) => r.code)).toEqual(['unknown_badge']);
+  });
+
+  it('a revoked badge is unknown too', async () => {
+    const { device, member } = await arrange();
+    await ctx.db('badges').where({ member_id: member.member.id }).update({ revoked_at: ctx.db.fn.now() });
+    const res = await device.post('/api/station/scan', { badge: member.badge });
+    expect(res.status).toBe(200);
+    expect(res.body.member).toBeNull();
+    expect(res.body.reasons[0].code).toBe('unknown_badge');
+    expect(JSON.stringify(res.body)).not.toContain('Ines');
+  });
+
+  it('clears a signed-off member with the waiver on file and sends the safety checklist', async () => {
+    const { device, member } = await arrange({ requiresPin: true });
+    const res = await device.post('/api/station/scan', { badge: member.badge });
+    expect(res.status).toBe(200);
+    const body = stationScanResultSchema.parse(res.body);
+    expect(body).toMatchObject({
+      member: { id: member.member.id, firstName: 'Ines', role: 'member' },
+      cleared: true,
+      reasons: [],
+      canSupervise: false,
+      runningSession: null,
+      requiresPin: true,
+      safetyChecklist: SAFETY,
+    });
+    expect(body.rungs.every((rung) => rung.passed)).toBe(true);
+  });
+
+  it('reads the facts of a decision in one statement', async () => {
+    const { device, member } = await arrange();
+    await device.get('/api/station/state');
+    const statements: string[] = [];
+    const listen = (query: { sql: string }) => statements.push(query.sql);
+    ctx.db.on('query', listen);
+    try {
+      expect((await device.post('/api/station/scan', { badge: member.badge })).body.cleared).toBe(true);
+    } finally {
+      ctx.db.off('query', listen);
+    }
+    // One to find the station by its device token, one for everything the decision needs.
+    expect(statements).toHaveLength(2);
+  });
+
+  it('a member without the sign-off is told which training and who teaches it', async () => {
+    const { device, training } = await arrange();
+    const other = await badgeHolder(ctx, 'member', { firstName: 'Jonas' });
+    await waiverOnFile(other);
+    const res = await device.post('/api/station/scan', { badge: other.badge });
+    expect(res.body.cleared).toBe(false);
+    expect(res.body.reasons).toHaveLength(1);
+    expect(res.body.reasons[0]).toMatchObject({ code: 'sign_off_missing', rule: 2 });
+    expect(res.body.reasons[0].message).toContain(training.name);
+    // The instructor who signed the training off is named as the one to ask.
+    expect(res.body.reasons[0].nextStep).toContain('Bettina');
+  });
+
+  it('an expired sign-off names the training and says it lapsed', async () => {
+    const { device, training, teacher } = await arrange();
+    const other = await badgeHolder(ctx, 'member');
+    await waiverOnFile(other);
+    await createSignOff(ctx.db, {
+      member_id: other.member.id,
+      training_id: training.id,
+      signed_by: teacher.member.id,
+      signed_at: new Date(Date.now() - 400 * 24 * HOUR),
+      expires_at: new Date(Date.now() - 35 * 24 * HOUR),
+    });
+    const res = await device.post('/api/station/scan', { badge: other.badge });
+    expect(res.body.cleared).toBe(false);
+    expect(res.body.reasons[0].code).toBe('sign_off_expired');
+    expect(res.body.reasons[0].message).toContain(training.name);
+  });
+
+  it('a member without the current waiver is not cleared', async () => {
+    const { device, training, teacher } = await arrange();
+    const other = await badgeHolder(ctx, 'member');
+    await createSignOff(ctx.db, { member_id: other.member.id, training_id: training.id, signed_by: teacher.member.id });
+    const res = await device.post('/api/station/scan', { badge: other.badge });
+    expect(res.body.reasons.map((r: { code: string }) => r.code)).toEqual(['waiver_missing']);
+  });
+
+  it('a supervised-only member needs a supervisor on duty', async () => {
+    const { device, member, teacher } = await arrange({ level: 'supervised' });
+    await nobodyOnDuty();
+    const without = await device.post('/api/station/scan', { badge: member.badge });
+    expect(without.body.cleared).toBe(false);
+    expect(without.body.reasons.map((r: { code: string }) => r.code)).toEqual(['supervisor_required']);
+
+    const duty = await device.post('/api/station/duty', { badge: teacher.badge, pin: teacher.pin });
+    expect(duty.status).toBe(200);
+    expect(duty.body).toEqual({ onDuty: true, supervisor: { firstName: 'Bettina' } });
+
+    const withSupervisor = await device.post('/api/station/scan', { badge: member.badge });
+    expect(withSupervisor.body.cleared).toBe(true);
+    expect((await device.get('/api/station/state')).body.supervisorOnDuty).toEqual({ firstName: 'Bettina' });
+
+    const off = await device.post('/api/station/duty', { badge: teacher.badge, pin: teacher.pin });
+    expect(off.body.onDuty).toBe(false);
+    expect((await device.post('/api/station/scan', { badge: member.badge })).body.cleared).toBe(false);
+  });
+
+  it('an instructor’s scan can supervise', async () => {
+    const { device, teacher } = await arrange();
+    const res = await device.post('/api/station/scan', { badge: teacher.badge });
+    expect(res.body.canSupervise).toBe(true);
+  });
+
+  it('another member scanning while a session runs is told who is on the machine', async () => {
+    const { device, member, training, teacher } = await arrange();
+    expect((await start(device, member)).status).toBe(201);
+    const other = await badgeHolder(ctx, 'member', { firstName: 'Jonas' });
+    await waiverOnFile(other);
+    await createSignOff(ctx.db, { member_id: other.member.id, training_id: training.id, signed_by: teacher.member.id });
+
+    const res = await device.post('/api/station/scan', { badge: other.badge });
+    expect(res.body.cleared).toBe(false);
+    expect(res.body.reasons.map((r: { code: string }) => r.code)).toEqual(['machine_in_use']);
+    expect(res.body.reasons[0].message).toContain('Ines');
+    expect(res.body.runningSession).toMatchObject({ memberFirstName: 'Ines', own: false });
+    // The member on the machine sees their own session.
+    expect((await device.post('/api/station/scan', { badge: member.badge })).body.runningSession.own).toBe(true);
+  });
+
+  it('a revoked station’s credential answers 401', async () => {
+    const { device, admin, station, member } = await arrange();
+    expect((await admin.post(`/api/stations/${station.id}/revoke`)).status).toBeLessThan(300);
+    const res = await device.post('/api/station/scan', { badge: member.badge });
+    expect(res.status).toBe(401);
+    expect(res.body.code).toBe('station_required');
+  });
+
+  it('a crib station answers 403 not_a_machine_station', async () => {
+    const { admin, member } = await arrange();
+    const created = await admin.post('/api/stations', { kind: 'crib', name: 'Tool crib' });
+    expect(created.status).toBe(201);
+    const crib = await browser(ctx);
+    expect((await crib.post('/api/station/pair', { pairingCode: created.body.pairingCode })).status).toBe(200);
+    const res = await crib.post('/api/station/scan', { badge: member.badge });
+    expect(res.status).toBe(403);
+    expect(res.body.code).toBe('not_a_machine_station');
+  });
+
+  it('is rate limited per station', async () => {
+    const { device } = await arrange();
+    for (let i = 0; i < SCANS_PER_MINUTE; i += 1) await device.post('/api/station/scan', { badge: 'q'.repeat(22) });
+    const res = await device.post('/api/station/scan', { badge: 'q'.repeat(22) });
+    expect(res.status).toBe(429);
+    // Another station is not held up.
+    const other = await pairedDevice(ctx);
+    expect((await other.device.post('/api/station/scan', { badge: 'q'.repeat(22) })).status).toBe(200);
+  });
+});
+
+describe('POST /api/station/sessions', () => {
+  it('refuses a start without every safety item, naming the missing ones', async () => {
+    const { device, member, machine } = await arrange();
+    const res = await start(device, member, { checklist: ['chuck-key-out'] });
+    expect(res.status).toBe(400);
+    expect(res.body.code).toBe('checklist_incomplete');
+    expect(res.body.errors.checklist).toEqual(['The chuck guard is closed', 'I am wearing safety glasses']);
+    expect(await ctx.db('machine_sessions').where({ machine_id: machine.id }).first()).toBeUndefined();
+  });
+
+  it('refuses a wrong PIN where the machine requires one', async () => {
+    const { device, member } = await arrange({ requiresPin: true });
+    expect((await start(device, member, { pin: '0000' })).status).toBe(401);
+    expect((await start(device, member)).body.code).toBe('wrong_pin');
+    expect((await start(device, member, { pin: member.pin })).status).toBe(201);
+  });
+
+  it('refuses a member who is not cleared, with the reasons', async () => {
+    const { device } = await arrange();
+    const other = await badgeHolder(ctx, 'member');
+    const res = await start(device, other);
+    expect(res.status).toBe(409);
+    expect(res.body.code).toBe('not_cleared');
+    expect(res.body.reasons.map((r: { code: string }) => r.code)).toEqual(['waiver_missing', 'sign_off_missing']);
+  });
+
+  it('the database allows one running session per machine', async () => {
+    const { machine, member } = await arrange();
+    await ctx.db('machine_sessions').insert({ machine_id: machine.id, member_id: member.member.id });
+    await expect(ctx.db('machine_sessions').insert({ machine_id: machine.id, member_id: member.member.id })).rejects.toMatchObject({ code: '23505' });
+  });
+});
+
+describe('POST /api/station/sessions/:id/end', () => {
+  it('start then end moves the meter by the session’s hours', async () => {
+    const { device, member, machine } = await arrange();
+    const started = await start(device, member);
+    expect(started.status).toBe(201);
+    const session = sessionStartedSchema.parse(started.body);
+    expect(session.member).toEqual({ id: member.member.id, firstName: 'Ines' });
+    expect((await device.get('/api/station/state')).body.runningSession).toMatchObject({ id: session.id, memberFirstName: 'Ines' });
+    // Ninety minutes of work, as if the session had started then.
+    await ctx.db('machine_sessions').where({ id: session.id }).update({ started_at: new Date(Date.now() - 1.5 * HOUR) });
+
+    const res = await device.post(`/api/station/sessions/${session.id}/end`, { idempotencyKey: randomUUID() });
+
+    expect(res.status).toBe(200);
+    const ended = sessionEndedSchema.parse(res.body);
+    expect(ended.hours).toBe(1.5);
+    const row = await ctx.db('machines').first('meter_hours').where({ id: machine.id });
+    expect(Number(row.meter_hours)).toBe(1.5);
+    expect(stationStateSchema.parse((await device.get('/api/station/state')).body).runningSession).toBeNull();
+  });
+
+  it('the same idempotency key again answers the same and is applied once', async () => {
+    const { device, member, machine } = await arrange();
+    const { id } = (await start(device, member)).body;
+    await ctx.db('machine_sessions').where({ id }).update({ started_at: new Date(Date.now() - HOUR) });
+    const key = randomUUID();
+    const first = await device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: key });
+    const again = await device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: key });
+    expect(again.status).toBe(200);
+    expect(again.body).toEqual(first.body);
+    expect(Number((await ctx.db('machines').first('meter_hours').where({ id: machine.id })).meter_hours)).toBe(1);
+    // A different key for an ended session is a conflict, not a second end.
+    expect((await device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: randomUUID() })).status).toBe(409);
+  });
+
+  it('an end pressed offline records the time it was pressed', async () => {
+    const { device, member } = await arrange();
+    const { id } = (await start(device, member)).body;
+    await ctx.db('machine_sessions').where({ id }).update({ started_at: new Date(Date.now() - 2 * HOUR) });
+    const pressed = new Date(Date.now() - HOUR);
+    const res = await device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: randomUUID(), endedAt: pressed.toISOString() });
+    expect(res.status).toBe(200);
+    expect(res.body.endedAt).toBe(pressed.toISOString());
+    expect(res.body.hours).toBe(1);
+    const row = await ctx.db('machine_sessions').first('*').where({ id });
+    expect(row.ended_at.toISOString()).toBe(pressed.toISOString());
+    expect(row.ended_by).toBe('member');
+  });
+
+  it('refuses an end time before the start or in the future', async () => {
+    const { device, member } = await arrange();
+    const { id, startedAt } = (await start(device, member)).body;
+    const before = new Date(new Date(startedAt).getTime() - 60_000).toISOString();
+    expect((await device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: randomUUID(), endedAt: before })).status).toBe(400);
+    const future = new Date(Date.now() + HOUR).toISOString();
+    expect((await device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: randomUUID(), endedAt: future })).status).toBe(400);
+  });
+
+  it('another member’s badge cannot end the session; theirs or a supervisor’s can', async () => {
+    const { device, member, teacher } = await arrange();
+    const other = await badgeHolder(ctx, 'member', { firstName: 'Jonas' });
+    const { id } = (await start(device, member)).body;
+
+    const refused = await device.post(`/api/station/sessions/${id}/end`, { badge: other.badge, idempotencyKey: randomUUID() });
+    expect(refused.status).toBe(403);
+    expect(refused.body.code).toBe('not_allowed');
+
+    const bySupervisor = await device.post(`/api/station/sessions/${id}/end`, { badge: teacher.badge, idempotencyKey: randomUUID() });
+    expect(bySupervisor.status).toBe(200);
+    expect((await ctx.db('machine_sessions').first('ended_by').where({ id })).ended_by).toBe('supervisor');
+
+    const second = (await start(device, member)).body;
+    const byOwner = await device.post(`/api/station/sessions/${second.id}/end`, { badge: member.badge, idempotencyKey: randomUUID() });
+    expect(byOwner.status).toBe(200);
+  });
+
+  it('another machine’s station cannot end the session', async () => {
+    const { device, member } = await arrange();
+    const { id } = (await start(device, member)).body;
+    const other = await pairedDevice(ctx);
+    const res = await other.device.post(`/api/station/sessions/${id}/end`, { idempotencyKey: randomUUID() });
+    expect(res.status).toBe(404);
+  });
+});
+
+describe('closeSilentSessions', () => {
+  it('closes the session of a station silent for three minutes at its last heartbeat', async () => {
+    const { device, member, machine, station } = await arrange();
+    const { id } = (await start(device, member)).body;
+    const startedAt = new Date(Date.now() - HOUR);
+    const lastSeen = new Date(Date.now() - 30 * 60_000);
+    await ctx.db('machine_sessions').where({ id }).update({ started_at: startedAt });
+    await ctx.db('stations').where({ id: station.id }).update({ last_seen_at: lastSeen });
+    const service = machineSessionsService(deps);
+
+    // Two minutes after the last heartbeat the station still counts as there.
+    expect((await service.closeSilentSessions(new Date(lastSeen.getTime() + 2 * 60_000))).map((s) => s.id)).not.toContain(id);
+    const closed = await service.closeSilentSessions(new Date());
+
+    expect(closed.map((s) => s.id)).toContain(id);
+    const row = await ctx.db('machine_sessions').first('*').where({ id });
+    expect(row.ended_at.toISOString()).toBe(lastSeen.toISOString());
+    expect(row.ended_by).toBe('heartbeat');
+    expect(Number(row.hours)).toBe(0.5);
+    expect(Number((await ctx.db('machines').first('meter_hours').where({ id: machine.id })).meter_hours)).toBe(0.5);
+    // Run again, nothing more happens.
+    expect((await service.closeSilentSessions(new Date())).map((s) => s.id)).not.toContain(id);
+  });
+});

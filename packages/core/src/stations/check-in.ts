@@ -1,0 +1,90 @@
+import { z } from 'zod';
+import { badgeCodeSchema } from '../badges/schemas';
+import { reasonSchema, rungSchema, UNKNOWN_BADGE } from '../clearance/schemas';
+import { roleSchema } from '../people/roles';
+import { checklistItemSchema } from '../trainings/schemas';
+
+const pinField = z.string().regex(/^\d{4,6}$/, { error: 'Use 4 to 6 digits.' });
+
+/**
+ * Whatever the scanner typed: a code that is not a badge code is answered like an unknown badge,
+ * so the station shows one message for every badge it cannot use.
+ */
+export const stationScanSchema = z.object({
+  badge: z.string({ error: 'Scan or type a badge code.' }).trim().min(1, { error: 'Scan or type a badge code.' }).max(200),
+});
+
+export const runningSessionSchema = z.object({
+  id: z.uuid(),
+  memberFirstName: z.string(),
+  startedAt: z.string(),
+  own: z.boolean(),
+});
+export type RunningSession = z.infer<typeof runningSessionSchema>;
+
+export const unknownBadgeReasonSchema = z.object({ code: z.literal(UNKNOWN_BADGE), message: z.string(), nextStep: z.string() });
+
+/** The decision after a scan at a machine station: who, whether they may start, and every reason why not. */
+export const stationScanResultSchema = z.object({
+  member: z.object({ id: z.uuid(), firstName: z.string(), role: roleSchema, hasPhoto: z.boolean() }).nullable(),
+  cleared: z.boolean(),
+  reasons: z.array(z.union([reasonSchema, unknownBadgeReasonSchema])),
+  rungs: z.array(rungSchema),
+  canSupervise: z.boolean(),
+  runningSession: runningSessionSchema.nullable(),
+  requiresPin: z.boolean(),
+  safetyChecklist: z.array(checklistItemSchema),
+});
+export type StationScanResult = z.infer<typeof stationScanResultSchema>;
+
+export const sessionStartSchema = z.object({
+  badge: badgeCodeSchema,
+  /** The ids of every safety item the member confirmed on the screen. */
+  checklist: z.array(z.string().max(60)).max(60),
+  pin: pinField.optional(),
+});
+export type SessionStart = z.infer<typeof sessionStartSchema>;
+
+export const sessionStartedSchema = z.object({
+  id: z.uuid(),
+  startedAt: z.string(),
+  member: z.object({ id: z.uuid(), firstName: z.string() }),
+});
+export type SessionStarted = z.infer<typeof sessionStartedSchema>;
+
+/** An end pressed while offline carries the time it was pressed; the key makes a replay harmless. */
+export const sessionEndSchema = z.object({
+  badge: badgeCodeSchema.optional(),
+  endedAt: z.iso.datetime({ offset: true, error: 'Give the time as an ISO 8601 date and time.' }).optional(),
+  idempotencyKey: z.uuid({ error: 'Send a UUID as the idempotency key.' }),
+});
+export type SessionEnd = z.infer<typeof sessionEndSchema>;
+
+/** How long after the press an offline end may still arrive with its own time. */
+export const OFFLINE_END_MAX_HOURS = 24;
+
+export const sessionEndedSchema = z.object({
+  id: z.uuid(),
+  startedAt: z.string(),
+  endedAt: z.string(),
+  hours: z.number(),
+});
+export type SessionEnded = z.infer<typeof sessionEndedSchema>;
+
+export const stationStateSchema = z.object({
+  machine: z.object({ id: z.uuid(), name: z.string(), category: z.string(), requiresPin: z.boolean() }),
+  runningSession: runningSessionSchema.omit({ own: true }).extend({ memberId: z.uuid() }).nullable(),
+  supervisorOnDuty: z.object({ firstName: z.string() }).nullable(),
+});
+export type StationState = z.infer<typeof stationStateSchema>;
+
+export const stationDutySchema = z.object({ badge: badgeCodeSchema, pin: pinField });
+
+export const stationDutyResultSchema = z.object({
+  onDuty: z.boolean(),
+  supervisor: z.object({ firstName: z.string() }),
+});
+export type StationDutyResult = z.infer<typeof stationDutyResultSchema>;
+
+/** Without a heartbeat for this long a station's running session is closed at its last contact. */
+export const HEARTBEAT_SILENCE_MINUTES = 3;
