@@ -12,13 +12,15 @@ interface BadgeReaderProps {
   busy?: boolean;
   /** What went wrong with the last scan, in words. */
   message?: ReactNode;
+  /** Off where the screen has other work (a running session): the scanner and the typed code still work. */
+  camera?: boolean;
 }
 
 /**
  * Three ways to give a badge: the camera inside the outline, a hand scanner typing the code,
  * or the code typed on the screen. Whichever comes first is used.
  */
-export function BadgeReader({ prompt, onBadge, busy = false, message }: BadgeReaderProps) {
+export function BadgeReader({ prompt, onBadge, busy = false, message, camera = true }: BadgeReaderProps) {
   const [typing, setTyping] = useState(false);
   const accept = (code: string) => {
     if (!busy) onBadge(code);
@@ -32,9 +34,11 @@ export function BadgeReader({ prompt, onBadge, busy = false, message }: BadgeRea
       ) : (
         <>
           {/* The outline has the proportions of the badge card (ISO/IEC 7810 ID-1, 85.60 × 53.98 mm). */}
-          <div className="flex aspect-[85.6/53.98] w-full max-w-[28rem] flex-col overflow-hidden rounded-2xl border-4 border-dashed border-ink-muted p-3">
-            <BadgeCamera onCode={accept} />
-          </div>
+          {camera ? (
+            <div className="flex aspect-[85.6/53.98] w-full max-w-[28rem] flex-col overflow-hidden rounded-2xl border-4 border-dashed border-ink-muted p-3">
+              <BadgeCamera onCode={accept} />
+            </div>
+          ) : null}
           <p className="flex items-center gap-4 text-center text-kiosk-lead font-bold text-balance">
             <Icon name="badge" className="size-12" />
             <span>{prompt}</span>

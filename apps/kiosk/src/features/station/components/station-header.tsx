@@ -2,10 +2,10 @@ import { machineCategoryLabels, type StationSelf } from '@chuckkey/core';
 import { Nameplate } from '@/components/ui/nameplate';
 
 /**
- * The machine's nameplate. Only "Available" is shown for now: live states (in use, tagged out)
- * arrive with sessions and tag-outs, and the plate never claims what the station cannot know.
+ * The machine's nameplate: in use while a session runs, else available. Tagged out arrives with
+ * tag-outs, and the plate never claims what the station cannot know.
  */
-export function StationHeader({ station, compact = false }: { station: StationSelf; compact?: boolean }) {
+export function StationHeader({ station, compact = false, inUse = false }: { station: StationSelf; compact?: boolean; inUse?: boolean }) {
   if (!station.machine) {
     return (
       <header className="bg-brand px-8 py-4 text-white">
@@ -15,7 +15,7 @@ export function StationHeader({ station, compact = false }: { station: StationSe
   }
   return (
     <header className="px-6 pt-5">
-      <Nameplate name={station.machine.name} state="available" detail={machineCategoryLabels[station.machine.category as keyof typeof machineCategoryLabels] ?? station.machine.category} size={compact ? 'md' : 'lg'} />
+      <Nameplate name={station.machine.name} state={inUse ? 'in_use' : 'available'} detail={machineCategoryLabels[station.machine.category as keyof typeof machineCategoryLabels] ?? station.machine.category} size={compact ? 'md' : 'lg'} />
     </header>
   );
 }

@@ -1,0 +1,60 @@
+import { useState, type ReactNode } from 'react';
+import { Button } from '@/components/ui/button';
+import { Icon } from '@/components/ui/icon';
+import { useNow } from '../hooks/use-now';
+import { describeElapsed, formatElapsed } from '../utils/elapsed';
+import { BadgeReader } from './badge-reader';
+
+/** A session runs: the time so far in digits readable across the shop, and the way to end it. */
+export function RunningScreen({
+  firstName,
+  startedAt,
+  onEnd,
+  ending,
+  onBadge,
+  scanning,
+  message,
+}: {
+  firstName: string;
+  startedAt: string;
+  onEnd: () => void;
+  ending: boolean;
+  onBadge: (code: string) => void;
+  scanning: boolean;
+  message: ReactNode;
+}) {
+  const now = useNow();
+  const [confirming, setConfirming] = useState(false);
+  const elapsed = now - new Date(startedAt).getTime();
+
+  return (
+    <div className="flex w-full max-w-5xl flex-col items-center gap-6 text-center">
+      <p className="flex items-center gap-4 text-kiosk-lead font-bold">
+        <Icon name="chuck" className="size-12" />
+        {firstName} is on this machine
+      </p>
+      <p className="font-mono text-[clamp(5rem,14vw,10rem)] leading-none font-bold tabular-nums" aria-hidden="true">
+        {formatElapsed(elapsed)}
+      </p>
+      <p className="sr-only">Running for {describeElapsed(elapsed)}</p>
+      {confirming ? (
+        <div role="dialog" aria-label="End the session?" className="flex flex-col items-center gap-4">
+          <p className="text-kiosk-lead font-bold">End {firstName}’s session now?</p>
+          <div className="flex flex-wrap justify-center gap-4">
+            <Button onClick={onEnd} disabled={ending} className="min-h-24">
+              Yes, end the session
+            </Button>
+            <Button variant="quiet" onClick={() => setConfirming(false)} className="min-h-24">
+              Keep running
+            </Button>
+          </div>
+        </div>
+      ) : (
+        <Button onClick={() => setConfirming(true)} className="min-h-24 px-16">
+          End session
+        </Button>
+      )}
+      <BadgeReader prompt="Someone else? Scan a badge" onBadge={onBadge} busy={scanning} message={message} camera={false} />
+    </div>
+  );
+}
