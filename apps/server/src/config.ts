@@ -27,6 +27,8 @@ const envSchema = z.object({
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   SIGN_IN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(10),
   SIGN_IN_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
+  // Badge scans one machine station may send a minute (see SCANS_PER_MINUTE in the station routes).
+  STATION_SCAN_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(60),
   ADMIN_DIST: z.string().default(path.join(appsDir, 'admin', 'dist')),
   KIOSK_DIST: z.string().default(path.join(appsDir, 'kiosk', 'dist')),
   SERVE_APPS: booleanish.default(true),

@@ -26,7 +26,8 @@ export const unknownBadgeReasonSchema = z.object({ code: z.literal(UNKNOWN_BADGE
 
 /** The decision after a scan at a machine station: who, whether they may start, and every reason why not. */
 export const stationScanResultSchema = z.object({
-  member: z.object({ id: z.uuid(), firstName: z.string(), role: roleSchema, hasPhoto: z.boolean() }).nullable(),
+  // photoToken lets this station fetch the member's photo for a few minutes after the scan.
+  member: z.object({ id: z.uuid(), firstName: z.string(), role: roleSchema, hasPhoto: z.boolean(), photoToken: z.string().nullable() }).nullable(),
   cleared: z.boolean(),
   reasons: z.array(z.union([reasonSchema, unknownBadgeReasonSchema])),
   rungs: z.array(rungSchema),

@@ -16,6 +16,7 @@ import { badgeCodeHash } from '@chuckkey/db';
 import type { Deps } from '../../lib/deps';
 import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
 import { badgesService } from '../badges/badges.service';
+import { grantToken, grantValid } from '../../lib/tokens';
 import type { StationRecord } from '../stations/stations.repository';
 import { machineSessionsRepository, type EndedBy, type ScanFacts, type SessionRecord } from './machine-sessions.repository';
 
@@ -80,6 +81,18 @@ const toEnded = (session: SessionRecord): SessionEnded => ({
   hours: session.hours ?? 0,
 });
 
+/** A station may show the photo of a member who just scanned there, for five minutes. */
+export const STATION_PHOTO_MINUTES = 5;
+const photoSubject = (stationId: string, memberId: string) => `station-photo.${stationId}.${memberId}`;
+
+export function stationPhotoGrant(secret: string, stationId: string, memberId: string, now: Date): string {
+  return grantToken(secret, photoSubject(stationId, memberId), new Date(now.getTime() + STATION_PHOTO_MINUTES * 60_000));
+}
+
+export function stationPhotoAllowed(secret: string, stationId: string, memberId: string, token: string, now: Date): boolean {
+  return grantValid(secret, photoSubject(stationId, memberId), token, now);
+}
+
 export function machineSessionsService(deps: Deps) {
   const { db } = deps;
   const sessions = machineSessionsRepository(db);
@@ -118,8 +131,13 @@ export function machineSessionsService(deps: Deps) {
         };
       }
       return {
-        // The station has no route for photos yet, so it is told there is none to show.
-        member: { id: member.id, firstName: member.firstName, role: member.role, hasPhoto: false },
+        member: {
+          id: member.id,
+          firstName: member.firstName,
+          role: member.role,
+          hasPhoto: member.hasPhoto,
+          photoToken: member.hasPhoto ? stationPhotoGrant(deps.config.SESSION_SECRET, station.id, member.id, now) : null,
+        },
         cleared: decision.cleared,
         reasons: decision.reasons,
         rungs: decision.rungs,

@@ -373,3 +373,31 @@ describe('closeSilentSessions', () => {
     expect((await service.closeSilentSessions(new Date())).map((s) => s.id)).not.toContain(id);
   });
 });
+
+describe('GET /api/station/members/:id/photo', () => {
+  it('shows the photo of a member just scanned at this station, and to no other station', async () => {
+    const { device, member } = await arrange();
+    await ctx.db('member_photos').insert({ member_id: member.member.id, image: Buffer.from([0xff, 0xd8, 0xff, 0xd9]), content_type: 'image/jpeg' });
+    const scan = stationScanResultSchema.parse((await device.post('/api/station/scan', { badge: member.badge })).body);
+    expect(scan.member?.hasPhoto).toBe(true);
+    const token = scan.member?.photoToken;
+    expect(token).toBeTruthy();
+
+    const photo = await device.get(`/api/station/members/${member.member.id}/photo?t=${encodeURIComponent(token!)}`);
+    expect(photo.status).toBe(200);
+    expect(photo.headers['content-type']).toContain('image/jpeg');
+
+    const other = await pairedDevice(ctx);
+    const elsewhere = await other.device.get(`/api/station/members/${member.member.id}/photo?t=${encodeURIComponent(token!)}`);
+    expect(elsewhere.status).toBe(403);
+    expect(elsewhere.body.code).toBe('photo_not_allowed');
+    const forged = await device.get(`/api/station/members/${member.member.id}/photo?t=9999999999999.forged`);
+    expect(forged.status).toBe(403);
+  });
+
+  it('a member without a photo scans with no photo grant', async () => {
+    const { device, member } = await arrange();
+    const scan = stationScanResultSchema.parse((await device.post('/api/station/scan', { badge: member.badge })).body);
+    expect(scan.member).toMatchObject({ hasPhoto: false, photoToken: null });
+  });
+});

@@ -16,10 +16,14 @@ import { perAddressLimit } from '../../lib/rate-limit';
 import { AppError } from '../../lib/errors';
 import { parse } from '../../lib/validate';
 import { currentStation, requireStation, setStationCookie } from '../../middleware/station-auth';
-import { machineSessionsService } from '../machine-sessions/machine-sessions.service';
+import { badgesService } from '../badges/badges.service';
+import { machineSessionsService, stationPhotoAllowed } from '../machine-sessions/machine-sessions.service';
 import { stationService } from './station.service';
 
-/** Scans one station may send a minute: far above a queue of people, well below a stuck scanner. */
+/**
+ * Scans one station may send a minute by default: far above a queue of people, well below a
+ * stuck scanner. STATION_SCAN_LIMIT_PER_MINUTE changes it (the scan benchmark raises it).
+ */
 export const SCANS_PER_MINUTE = 60;
 
 const sessionParams = z.object({ id: z.uuid({ error: 'Not a session id.' }) });
@@ -34,7 +38,7 @@ export function stationRoutes(deps: Deps): Router {
   // Counted per station, not per address: several stations may share one address behind the shop's router.
   const scanLimit = rateLimit({
     windowMs: 60_000,
-    limit: SCANS_PER_MINUTE,
+    limit: deps.config.STATION_SCAN_LIMIT_PER_MINUTE,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => currentStation(req).id,
@@ -81,6 +85,19 @@ export function stationRoutes(deps: Deps): Router {
   router.post('/scan', scanLimit, async (req, res) => {
     const { badge } = parse(stationScanSchema, req.body, 'body');
     res.json(await sessions.scan(currentStation(req), badge, new Date()));
+  });
+
+  const photoQuery = z.object({ t: z.string().max(200) });
+  const memberParams = z.object({ id: z.uuid({ error: 'Not a member id.' }) });
+  router.get('/members/:id/photo', async (req, res) => {
+    const { id } = parse(memberParams, req.params, 'params');
+    const { t } = parse(photoQuery, req.query, 'query');
+    if (!stationPhotoAllowed(deps.config.SESSION_SECRET, currentStation(req).id, id, t, new Date())) {
+      throw new AppError(403, 'photo_not_allowed', 'A station shows a member\'s photo only just after their badge was scanned there.');
+    }
+    const photo = await badgesService(deps).photo(id);
+    res.type(photo.contentType).setHeader('Cache-Control', 'no-store');
+    res.send(photo.image);
   });
 
   router.get('/state', async (req, res) => {

@@ -45,9 +45,9 @@ export function DecisionScreen({
   return (
     <div className="flex w-full max-w-6xl flex-col items-center gap-5">
       <div className="flex items-center gap-6">
-        {member.hasPhoto && !photoFailed ? (
+        {member.photoToken && !photoFailed ? (
           <img
-            src={`/api/station/members/${member.id}/photo`}
+            src={`/api/station/members/${member.id}/photo?t=${encodeURIComponent(member.photoToken)}`}
             alt=""
             onError={() => setPhotoFailed(true)}
             className="size-28 rounded-xl border-4 border-ink-muted object-cover"
