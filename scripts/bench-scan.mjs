@@ -1,0 +1,185 @@
+// pnpm bench:scan: scan-to-decision latency and throughput of POST /api/station/scan on a
+// throwaway database seeded to a busy shop's size, through the real server.
+import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { randomBytes } from 'node:crypto';
+import { performance } from 'node:perf_hooks';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { done, fail, step } from './lib/log.mjs';
+import { freePort } from './lib/postgres.mjs';
+import { run } from './lib/run.mjs';
+import { healthy, prepareDatabase, root, spawnService, startCluster, stopChild, waitFor } from './lib/stack.mjs';
+
+const RATE = 200;
+const OPEN_LOOP_SECONDS = 30;
+const CONCURRENCY = 32;
+const SATURATION_SECONDS = 15;
+const WARM_UP = 500;
+
+let cluster;
+let home;
+let server;
+
+function percentile(sorted, p) {
+  if (!sorted.length) return NaN;
+  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
+}
+
+function summary(label, latencies, seconds, failures) {
+  const sorted = Float64Array.from(latencies).sort();
+  const ms = (v) => v.toFixed(2);
+  console.log(
+    `${label}: ${latencies.length} requests in ${seconds.toFixed(1)} s, ${(latencies.length / seconds).toFixed(0)} decisions/s, ` +
+      `p50 ${ms(percentile(sorted, 50))} ms, p95 ${ms(percentile(sorted, 95))} ms, p99 ${ms(percentile(sorted, 99))} ms, ` +
+      `max ${ms(sorted[sorted.length - 1] ?? NaN)} ms, non-200 answers ${failures}`,
+  );
+}
+
+async function cleanup() {
+  await stopChild(server);
+  if (cluster) {
+    try {
+      cluster.stop();
+    } catch (error) {
+      console.error(`could not stop the throwaway cluster: ${error.message}`);
+    }
+  }
+  if (home) rmSync(home, { recursive: true, force: true });
+}
+
+async function main() {
+  home = mkdtempSync(path.join(os.tmpdir(), 'chuckkey-bench-'));
+  chmodSync(home, 0o755);
+  const started = await startCluster({ home, port: await freePort(), throwaway: true, database: 'chuckkey_bench' });
+  cluster = started.cluster;
+  const databaseUrl = started.url;
+  await prepareDatabase(databaseUrl, { seed: false });
+
+  const badgeSecret = randomBytes(32).toString('hex');
+  const output = path.join(home, 'bench-seed.json');
+  step('Seeding 10,000 members, 100 machines and 1,000,000 past sessions');
+  await run(path.join(root, 'db', 'node_modules', '.bin', 'tsx'), ['src/bench-seed.ts'], {
+    cwd: path.join(root, 'db'),
+    env: { ...process.env, DATABASE_URL: databaseUrl, BADGE_SECRET: badgeSecret, BENCH_OUTPUT: output },
+    fix: 'the lines above say which step of the seed failed.',
+  });
+  const { badges, stations } = JSON.parse(readFileSync(output, 'utf8'));
+  done(`seeded ${badges.length} badges and ${stations.length} stations`);
+
+  step('Starting the server (production mode)');
+  const port = await freePort();
+  server = spawnService('server', ['src/main.ts'], {
+    NODE_ENV: 'production',
+    LOG_LEVEL: 'warn',
+    HOST: '127.0.0.1',
+    PORT: String(port),
+    DATABASE_URL: databaseUrl,
+    SESSION_SECRET: randomBytes(32).toString('hex'),
+    BADGE_SECRET: badgeSecret,
+    SERVE_APPS: 'false',
+    COOKIE_SECURE: 'false',
+    STATION_SCAN_LIMIT_PER_MINUTE: '1000000',
+  });
+  const base = `http://127.0.0.1:${port}`;
+  await waitFor(() => healthy(base), server, 'the server');
+  done(`server on ${base}`);
+
+  // Each kiosk has a web session of its own, with its CSRF token, as in the shop.
+  async function kioskSession(token) {
+    const res = await fetch(`${base}/api/auth/csrf`);
+    if (!res.ok) throw new Error(`GET /api/auth/csrf answered ${res.status}`);
+    const cookie = res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const { token: csrfToken } = await res.json();
+    if (!csrfToken) throw new Error('GET /api/auth/csrf sent no token');
+    return { cookie: `${cookie}; chuckkey.station=${token}`, csrfToken };
+  }
+  const kiosks = [];
+  for (const token of stations) kiosks.push(await kioskSession(token));
+
+  const pick = (list) => list[Math.floor(Math.random() * list.length)];
+  const cleared = { yes: 0, no: 0 };
+  const statuses = new Map();
+  async function scan() {
+    const kiosk = pick(kiosks);
+    const res = await fetch(`${base}/api/station/scan`, {
+      method: 'POST',
+      headers: {
+        cookie: kiosk.cookie,
+        'x-csrf-token': kiosk.csrfToken,
+        'content-type': 'application/json',
+      },
+      body: JSON.stringify({ badge: pick(badges) }),
+    });
+    const body = await res.json();
+    if (res.status === 200) cleared[body.cleared ? 'yes' : 'no'] += 1;
+    else statuses.set(`${res.status} ${body.code ?? ''}`.trim(), (statuses.get(`${res.status} ${body.code ?? ''}`.trim()) ?? 0) + 1);
+    return res.status;
+  }
+
+  step(`Warming up (${WARM_UP} scans)`);
+  const first = await scan();
+  if (first !== 200) throw new Error(`the first scan answered ${first}`);
+  for (let i = 0; i < WARM_UP / 10; i += 1) await Promise.all(Array.from({ length: 10 }, scan));
+  cleared.yes = 0;
+  cleared.no = 0;
+
+  step(`Open loop: ${RATE} scans/s for ${OPEN_LOOP_SECONDS} s, latency from each scan's due time`);
+  {
+    const total = RATE * OPEN_LOOP_SECONDS;
+    const interval = 1000 / RATE;
+    const latencies = [];
+    let failures = 0;
+    const inFlight = [];
+    const start = performance.now() + 50;
+    for (let i = 0; i < total; i += 1) {
+      const due = start + i * interval;
+      const wait = due - performance.now();
+      if (wait > 1) await sleep(wait - 0.5);
+      while (performance.now() < due) { /* the last fraction of a millisecond */ }
+      inFlight.push(
+        scan().then(
+          (status) => {
+            latencies.push(performance.now() - due);
+            if (status !== 200) failures += 1;
+          },
+          (error) => {
+            latencies.push(performance.now() - due);
+            failures += 1;
+            statuses.set(`failed: ${error.cause?.code ?? error.message}`, (statuses.get(`failed: ${error.cause?.code ?? error.message}`) ?? 0) + 1);
+          },
+        ),
+      );
+    }
+    await Promise.all(inFlight);
+    summary(`open loop ${RATE}/s`, latencies, (performance.now() - start) / 1000, failures);
+  }
+
+  step(`Saturation: ${CONCURRENCY} concurrent loops for ${SATURATION_SECONDS} s`);
+  {
+    const latencies = [];
+    let failures = 0;
+    const start = performance.now();
+    const end = start + SATURATION_SECONDS * 1000;
+    await Promise.all(
+      Array.from({ length: CONCURRENCY }, async () => {
+        while (performance.now() < end) {
+          const t = performance.now();
+          try {
+            if ((await scan()) !== 200) failures += 1;
+          } catch {
+            failures += 1;
+          }
+          latencies.push(performance.now() - t);
+        }
+      }),
+    );
+    summary(`saturation x${CONCURRENCY}`, latencies, (performance.now() - start) / 1000, failures);
+  }
+  console.log(`decisions: ${cleared.yes} cleared, ${cleared.no} not cleared (both are answers)`);
+  if (statuses.size) console.log(`non-200 answers by status: ${[...statuses].map(([k, v]) => `${k}: ${v}`).join(', ')}`);
+}
+
+main()
+  .catch((error) => fail(error))
+  .finally(cleanup);
