@@ -8,6 +8,7 @@ import { performance } from 'node:perf_hooks';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { done, fail, step } from './lib/log.mjs';
 import { freePort } from './lib/postgres.mjs';
+import { leanConnection } from './lib/lean-http.mjs';
 import { run } from './lib/run.mjs';
 import { healthy, prepareDatabase, root, spawnService, startCluster, stopChild, waitFor } from './lib/stack.mjs';
 
@@ -85,36 +86,28 @@ async function main() {
   await waitFor(() => healthy(base), server, 'the server');
   done(`server on ${base}`);
 
-  // Each kiosk has a web session of its own, with its CSRF token, as in the shop.
-  async function kioskSession(token) {
-    const res = await fetch(`${base}/api/auth/csrf`);
-    if (!res.ok) throw new Error(`GET /api/auth/csrf answered ${res.status}`);
-    const cookie = res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-    const { token: csrfToken } = await res.json();
-    if (!csrfToken) throw new Error('GET /api/auth/csrf sent no token');
-    return { cookie: `${cookie}; chuckkey.station=${token}`, csrfToken };
-  }
-  const kiosks = [];
-  for (const token of stations) kiosks.push(await kioskSession(token));
+  // Each kiosk holds its own device cookie, as in the shop.
+  const kiosks = stations.map((token) => ({ cookie: `chuckkey.station=${token}` }));
 
   const pick = (list) => list[Math.floor(Math.random() * list.length)];
   const cleared = { yes: 0, no: 0 };
   const statuses = new Map();
+  // Keep-alive connections, each carrying one request at a time; a scan takes an idle one or opens one.
+  const idle = [];
+  const { hostname, port: serverPort } = new URL(base);
   async function scan() {
+    const connection = idle.pop() ?? leanConnection(hostname, Number(serverPort));
     const kiosk = pick(kiosks);
-    const res = await fetch(`${base}/api/station/scan`, {
-      method: 'POST',
-      headers: {
-        cookie: kiosk.cookie,
-        'x-csrf-token': kiosk.csrfToken,
-        'content-type': 'application/json',
-      },
-      body: JSON.stringify({ badge: pick(badges) }),
-    });
-    const body = await res.json();
-    if (res.status === 200) cleared[body.cleared ? 'yes' : 'no'] += 1;
-    else statuses.set(`${res.status} ${body.code ?? ''}`.trim(), (statuses.get(`${res.status} ${body.code ?? ''}`.trim()) ?? 0) + 1);
-    return res.status;
+    const { status, body } = await connection.post(
+      '/api/station/scan',
+      { cookie: kiosk.cookie, 'x-chuckkey-station': '1', 'content-type': 'application/json' },
+      JSON.stringify({ badge: pick(badges) }),
+    );
+    idle.push(connection);
+    const answer = JSON.parse(body.toString('utf8'));
+    if (status === 200) cleared[answer.cleared ? 'yes' : 'no'] += 1;
+    else statuses.set(`${status} ${answer.code ?? ''}`.trim(), (statuses.get(`${status} ${answer.code ?? ''}`.trim()) ?? 0) + 1);
+    return status;
   }
 
   step(`Warming up (${WARM_UP} scans)`);
@@ -178,6 +171,7 @@ async function main() {
   }
   console.log(`decisions: ${cleared.yes} cleared, ${cleared.no} not cleared (both are answers)`);
   if (statuses.size) console.log(`non-200 answers by status: ${[...statuses].map(([k, v]) => `${k}: ${v}`).join(', ')}`);
+  for (const connection of idle) connection.close();
 }
 
 main()

@@ -1,12 +1,12 @@
-import { randomUUID } from 'node:crypto';
 import express from 'express';
 import helmet from 'helmet';
 import { Passport } from 'passport';
-import { pinoHttp } from 'pino-http';
 import type { Deps } from './lib/deps';
 import { apiNotFound, problemHandler } from './lib/problem';
 import { csrfProtection } from './middleware/csrf';
+import { requestLogging } from './middleware/request-log';
 import { createSessionMiddleware } from './middleware/session';
+import { stationRequestCheck } from './middleware/station-csrf';
 import { authRoutes } from './modules/auth/auth.routes';
 import { healthRoutes } from './modules/health/health.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
@@ -25,26 +25,15 @@ import { teachRoutes } from './modules/teach/teach.routes';
 import { trainingsRoutes } from './modules/trainings/trainings.routes';
 import { staticApps } from './static-apps';
 
-const REQUEST_ID = /^[A-Za-z0-9._-]{1,100}$/;
-
 export function createApp(deps: Deps) {
   const { config, logger } = deps;
   const app = express();
   app.disable('x-powered-by');
+  // API answers are made per request; hashing each body for an ETag would cost every scan for nothing.
+  app.set('etag', false);
   app.set('trust proxy', config.trustProxy);
 
-  app.use(
-    pinoHttp({
-      logger,
-      genReqId: (req, res) => {
-        const given = req.headers['x-request-id'];
-        const id = typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
-        res.setHeader('x-request-id', id);
-        return id;
-      },
-      autoLogging: { ignore: (req) => req.url === '/api/health' },
-    }),
-  );
+  app.use(requestLogging(logger));
   // Kiosks on the shop's network may reach the server over plain HTTP: upgrading their requests
   // to HTTPS, or pinning HTTPS, would break them unless the shop serves TLS.
   const tls = config.COOKIE_SECURE === 'true';
@@ -61,6 +50,9 @@ export function createApp(deps: Deps) {
   const api = express.Router();
   api.use(express.json({ limit: '100kb' }));
   api.use('/health', healthRoutes(deps));
+  // A station is a device, not a person's sign-in: its routes neither read nor roll a web
+  // session (each scan would otherwise cost a session read and write; docs/decisions/008).
+  api.use('/station', stationRequestCheck, stationRoutes(deps));
   api.use(sessions.middleware);
   api.use(passport.initialize());
   api.use(passport.session());
@@ -71,7 +63,6 @@ export function createApp(deps: Deps) {
   api.use('/invitations', invitationsRoutes(deps));
   api.use('/outbox', outboxRoutes(deps));
   api.use('/stations', stationsRoutes(deps));
-  api.use('/station', stationRoutes(deps));
   api.use(shopRoutes(deps));
   api.use(badgesRoutes(deps));
   api.use(waiversRoutes(deps));

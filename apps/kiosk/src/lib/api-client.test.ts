@@ -34,50 +34,30 @@ function fakeServer(answer: (call: Call, calls: Call[]) => Response) {
 }
 
 describe('kiosk API client', () => {
-  it('fetches the CSRF token once and sends it on every POST', async () => {
-    const server = fakeServer((call) => (call.url === '/api/auth/csrf' ? json(200, { token: 'tok-1' }) : new Response(null, { status: 204 })));
+  it('sends the station request header on every POST and fetches nothing else first', async () => {
+    const server = fakeServer(() => new Response(null, { status: 204 }));
     const api = createApiClient(server.fetchImpl);
 
     await api.post('/station/heartbeat');
     await api.post('/station/heartbeat');
 
-    expect(server.calls.map((c) => `${c.method} ${c.url}`)).toEqual([
-      'GET /api/auth/csrf',
-      'POST /api/station/heartbeat',
-      'POST /api/station/heartbeat',
-    ]);
-    expect(server.calls.filter((c) => c.method === 'POST').every((c) => c.headers['x-csrf-token'] === 'tok-1')).toBe(true);
+    expect(server.calls.map((c) => `${c.method} ${c.url}`)).toEqual(['POST /api/station/heartbeat', 'POST /api/station/heartbeat']);
+    expect(server.calls.every((c) => c.headers['x-chuckkey-station'] === '1')).toBe(true);
+    expect(server.calls.every((c) => c.headers['content-type'] === 'application/json')).toBe(true);
   });
 
-  it('does not send a token with GET requests', async () => {
+  it('does not send the header with GET requests', async () => {
     const server = fakeServer(() => json(200, { ok: true }));
     const api = createApiClient(server.fetchImpl);
 
     await api.get('/station', z.object({ ok: z.boolean() }));
 
     expect(server.calls).toHaveLength(1);
-    expect(server.calls[0]?.headers['x-csrf-token']).toBeUndefined();
-  });
-
-  it('after csrf_invalid fetches a fresh token and tries once more', async () => {
-    let tokens = 0;
-    const server = fakeServer((call, calls) => {
-      if (call.url === '/api/auth/csrf') return json(200, { token: `tok-${++tokens}` });
-      const posts = calls.filter((c) => c.method === 'POST').length;
-      return posts === 1 ? problem(403, 'csrf_invalid', 'Reload and try again.') : json(200, { id: 'x' });
-    });
-    const api = createApiClient(server.fetchImpl);
-
-    const answer = await api.post('/station/pair', { pairingCode: 'ABCDEFGH' }, z.object({ id: z.string() }));
-
-    expect(answer).toEqual({ id: 'x' });
-    expect(server.calls.filter((c) => c.method === 'POST').map((c) => c.headers['x-csrf-token'])).toEqual(['tok-1', 'tok-2']);
+    expect(server.calls[0]?.headers['x-chuckkey-station']).toBeUndefined();
   });
 
   it('turns problem details into an ApiError with the status, code and detail', async () => {
-    const server = fakeServer((call) =>
-      call.url === '/api/auth/csrf' ? json(200, { token: 't' }) : problem(401, 'wrong_pin', 'That PIN is not right. Try again.'),
-    );
+    const server = fakeServer(() => problem(401, 'wrong_pin', 'That PIN is not right. Try again.'));
     const api = createApiClient(server.fetchImpl);
 
     const error = await api.post('/station/instructor', { badge: 'b', pin: '1234' }).catch((e: unknown) => e);

@@ -1,4 +1,4 @@
-import { csrfResponseSchema, problemSchema, type Problem } from '@chuckkey/core';
+import { problemSchema, STATION_REQUEST_HEADER, type Problem } from '@chuckkey/core';
 import type { z } from 'zod';
 
 /** Every failed call ends as one of these; status 0 means the server could not be reached. */
@@ -35,12 +35,11 @@ async function readProblem(response: Response): Promise<Problem | null> {
 type Result<S> = S extends z.ZodType ? z.output<S> : void;
 
 /**
- * One client per page. A kiosk has no signed-in person, but its web session still carries the
- * CSRF token (GET /api/auth/csrf works without signing in), sent in `x-csrf-token` on every POST.
+ * One client per page. A kiosk has no signed-in person and no web session: its device cookie is
+ * its credential, and every POST carries the station request header, the station routes' CSRF
+ * defence (the server refuses writes without it).
  */
 export function createApiClient(fetchImpl: typeof fetch = (input, init) => globalThis.fetch(input, init)) {
-  let csrfToken: Promise<string> | undefined;
-
   async function send(path: string, init: RequestInit): Promise<Response> {
     try {
       return await fetchImpl(`/api${path}`, { credentials: 'same-origin', ...init });
@@ -50,21 +49,6 @@ export function createApiClient(fetchImpl: typeof fetch = (input, init) => globa
     }
   }
 
-  async function fetchCsrfToken(): Promise<string> {
-    const response = await send('/auth/csrf', { headers: { accept: 'application/json' } });
-    if (!response.ok) throw new ApiError(response.status, await readProblem(response));
-    return csrfResponseSchema.parse(await response.json()).token;
-  }
-
-  // Fetched once; a failed fetch is forgotten so that the next call tries again.
-  function currentCsrfToken(): Promise<string> {
-    csrfToken ??= fetchCsrfToken().catch((error: unknown) => {
-      csrfToken = undefined;
-      throw error;
-    });
-    return csrfToken;
-  }
-
   /** Answers are checked against core's schema, so a server of another version fails loudly. */
   async function get<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.output<S>> {
     const response = await send(path, { headers: { accept: 'application/json' }, signal });
@@ -72,23 +56,13 @@ export function createApiClient(fetchImpl: typeof fetch = (input, init) => globa
     return schema.parse(await response.json());
   }
 
-  async function post<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S, isRetry = false): Promise<Result<S>> {
-    const token = await currentCsrfToken();
+  async function post<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S): Promise<Result<S>> {
     const response = await send(path, {
       method: 'POST',
-      headers: { accept: 'application/json', 'content-type': 'application/json', 'x-csrf-token': token },
+      headers: { accept: 'application/json', 'content-type': 'application/json', [STATION_REQUEST_HEADER]: '1' },
       body: JSON.stringify(body ?? {}),
     });
-    if (!response.ok) {
-      const error = new ApiError(response.status, await readProblem(response));
-      // The web session behind the token ended (it lapses after hours without requests): one
-      // fresh token, one more try.
-      if (error.status === 403 && error.code === 'csrf_invalid' && !isRetry) {
-        csrfToken = undefined;
-        return post(path, body, schema, true);
-      }
-      throw error;
-    }
+    if (!response.ok) throw new ApiError(response.status, await readProblem(response));
     if (!schema) return undefined as Result<S>;
     return schema.parse(await response.json()) as Result<S>;
   }

@@ -1,4 +1,5 @@
 import type { Request, RequestHandler, Response } from 'express';
+import { ipKeyGenerator } from 'express-rate-limit';
 import { STATION_COOKIE } from '@chuckkey/core';
 import type { Config } from '../config';
 import type { Deps } from '../lib/deps';
@@ -45,32 +46,51 @@ export function readCookie(header: string | undefined, name: string): string | u
 }
 
 /**
- * Loads the paired station from its device cookie. The device credential is independent of any
- * person's sign-in: a station keeps working when nobody is signed in, and nobody's session
- * grants a station's rights.
+ * The paired station behind the request's device cookie, found by `lookup` (given the token's
+ * hash; it may fetch more in the same round trip), or a station_required error. The device
+ * credential is independent of any person's sign-in: a station keeps working when nobody is signed
+ * in, and nobody's session grants a station's rights.
  */
-export function requireStation({ config, db }: Deps): RequestHandler {
-  const stations = stationsRepository(db);
+export async function stationFromRequest(
+  { config, db }: Deps,
+  req: Request,
+  res: Response,
+  lookup: (deviceTokenHash: string) => Promise<StationRecord | undefined>,
+): Promise<StationRecord> {
+  const token = readCookie(req.headers.cookie, STATION_COOKIE);
+  if (!token) throw stationRequired();
+  const station = await lookup(hashToken(token));
+  if (!station || station.revokedAt) {
+    clearStationCookie(config, req, res);
+    throw stationRequired();
+  }
+  // Writing on every request would make each scan a row update; once a minute is precise
+  // enough for "last contact" and for spotting a station that went quiet.
+  if (!station.lastSeenAt || Date.now() - station.lastSeenAt.getTime() >= LAST_SEEN_EVERY_MS) {
+    station.lastSeenAt = await stationsRepository(db).touch(station.id);
+    setStationCookie(config, req, res, token);
+  }
+  req.station = station;
+  return station;
+}
+
+/** The rate-limit key of a request's device: its token's hash, or its address when it has none. */
+export function deviceKey(req: Request): string {
+  const token = readCookie(req.headers.cookie, STATION_COOKIE);
+  // ipKeyGenerator groups an IPv6 address by its /56, as the library's own limits do.
+  return token ? hashToken(token) : `address:${ipKeyGenerator(req.ip ?? '')}`;
+}
+
+/** Loads the paired station from its device cookie into `req.station`. */
+export function requireStation(deps: Deps): RequestHandler {
+  const stations = stationsRepository(deps.db);
   return async (req, res, next) => {
-    const token = readCookie(req.headers.cookie, STATION_COOKIE);
-    if (!token) {
-      next(stationRequired());
-      return;
+    try {
+      await stationFromRequest(deps, req, res, (hash) => stations.findByDeviceTokenHash(hash));
+      next();
+    } catch (error) {
+      next(error);
     }
-    const station = await stations.findByDeviceTokenHash(hashToken(token));
-    if (!station || station.revokedAt) {
-      clearStationCookie(config, req, res);
-      next(stationRequired());
-      return;
-    }
-    // Writing on every request would make each heartbeat a row update; once a minute is
-    // precise enough for "last contact" and for spotting a station that went quiet.
-    if (!station.lastSeenAt || Date.now() - station.lastSeenAt.getTime() >= LAST_SEEN_EVERY_MS) {
-      station.lastSeenAt = await stations.touch(station.id);
-      setStationCookie(config, req, res, token);
-    }
-    req.station = station;
-    next();
   };
 }
 

@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import net from 'node:net';
 import request from 'supertest';
 import { inject } from 'vitest';
-import type { Role } from '@chuckkey/core';
+import { STATION_REQUEST_HEADER, type Role } from '@chuckkey/core';
 import { createMember, type CreatedMember } from '@chuckkey/db/factories';
 import { createApp } from '../app';
 import { loadConfig, type Config } from '../config';
@@ -58,7 +58,10 @@ export function clientAddress(): string {
   return `2001:db8:${groups}`;
 }
 
-/** A browser-like client: keeps cookies, fetched the CSRF token, comes from its own address. */
+/**
+ * A browser-like client: keeps cookies, fetched the CSRF token, comes from its own address. Its
+ * writes also carry the station screens' request header, as a kiosk's do.
+ */
 export async function browser(ctx: TestContext, ip = clientAddress()) {
   const agent = request.agent(ctx.app);
   const csrf = await agent.get('/api/auth/csrf').set('x-forwarded-for', ip);
@@ -68,9 +71,9 @@ export async function browser(ctx: TestContext, ip = clientAddress()) {
     token,
     ip,
     get: (path: string) => agent.get(path).set('x-forwarded-for', ip),
-    post: (path: string, body?: object) => agent.post(path).set('x-forwarded-for', ip).set('x-csrf-token', token).send(body),
-    put: (path: string, body?: object) => agent.put(path).set('x-forwarded-for', ip).set('x-csrf-token', token).send(body),
-    patch: (path: string, body?: object) => agent.patch(path).set('x-forwarded-for', ip).set('x-csrf-token', token).send(body),
+    post: (path: string, body?: object) => agent.post(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1').send(body),
+    put: (path: string, body?: object) => agent.put(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1').send(body),
+    patch: (path: string, body?: object) => agent.patch(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1').send(body),
   };
 }
 export type Browser = Awaited<ReturnType<typeof browser>>;

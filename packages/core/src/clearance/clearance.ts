@@ -281,14 +281,15 @@ function teachersOf(training: RequiredTraining): string {
 }
 
 /** Times and dates in the shop's time zone, worded simply: "9:00 today", "Saturday 9:00", "14 March". */
-class Wording {
-  private readonly parts: Intl.DateTimeFormat;
-
-  constructor(
-    private readonly timeZone: string,
-    private readonly now: Date,
-  ) {
-    this.parts = new Intl.DateTimeFormat('en-GB', {
+/**
+ * Building an Intl.DateTimeFormat costs far more than using one, and a decision is made on every
+ * scan: one per time zone, made when a message first needs a time.
+ */
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+function dateFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = dateFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-GB', {
       timeZone,
       weekday: 'long',
       day: 'numeric',
@@ -298,6 +299,19 @@ class Wording {
       minute: '2-digit',
       hourCycle: 'h23',
     });
+    dateFormats.set(timeZone, format);
+  }
+  return format;
+}
+
+class Wording {
+  constructor(
+    private readonly timeZone: string,
+    private readonly now: Date,
+  ) {}
+
+  private get parts(): Intl.DateTimeFormat {
+    return dateFormat(this.timeZone);
   }
 
   private local(date: Date): Record<'weekday' | 'day' | 'month' | 'year' | 'hour' | 'minute', string> {

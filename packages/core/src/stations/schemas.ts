@@ -75,6 +75,8 @@ export type StationWithCode = z.infer<typeof stationWithCodeSchema>;
 
 /** The name of the device cookie that a paired station holds instead of a person's session. */
 export const STATION_COOKIE = 'chuckkey.station';
+/** Sent as `x-chuckkey-station: 1` on every state-changing station request: the station routes' CSRF defence. */
+export const STATION_REQUEST_HEADER = 'x-chuckkey-station';
 
 export const stationMemberLookupSchema = z.object({ badge: badgeCodeSchema });
 

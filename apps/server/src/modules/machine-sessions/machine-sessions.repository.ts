@@ -1,5 +1,7 @@
 import type { ChecklistItem, MachineCategory, Role, SignOffLevel } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
+import { preparedRows } from '../../lib/prepared';
+import type { StationRecord } from '../stations/stations.repository';
 
 export type EndedBy = 'member' | 'supervisor' | 'admin' | 'heartbeat' | 'next_member';
 
@@ -37,11 +39,28 @@ export const TEACHERS_NAMED = 3;
  * three instructors who signed each off lately, the member's sign-offs for those trainings in any
  * state, a supervisor on duty and the machine's running session. With no badge hash (null) the
  * member parts come back empty. The shop's time zone comes along for the wording of times.
+ *
+ * Two forms: by machine id, and by a station's device token hash, which also answers the station
+ * (so a scan is a single round trip: credential, machine and member at once). Parameters are $1
+ * (machine id or device token hash), $2 (badge code hash), $3 (months a teacher counts as
+ * recent) and $4 (teachers named). Both run as prepared statements: planning this text costs
+ * more than running it.
  */
-const FACTS_SQL = `
-with machine as (
+function factsSql(by: 'machine' | 'station'): string {
+  const station =
+    by === 'station'
+      ? `station as (
+  select st.id, st.kind, st.name, st.machine_id as "machineId", st.paired_at as "pairedAt",
+    st.last_seen_at as "lastSeenAt", st.revoked_at as "revokedAt", st.pairing_expires_at as "pairingExpiresAt"
+  from stations st where st.device_token_hash = $1 and st.revoked_at is null
+),
+`
+      : '';
+  const machineId = by === 'station' ? '(select "machineId" from station)' : '$1::uuid';
+  return `
+with ${station}machine as (
   select m.id, m.name, m.category, m.requires_pin as "requiresPin", m.safety_checklist as "safetyChecklist"
-  from machines m where m.id = :machineId
+  from machines m where m.id = ${machineId}
 ),
 holder as (
   select p.id, p.first_name as "firstName", p.role, p.active,
@@ -51,7 +70,7 @@ holder as (
     ) as "waiverOnFile",
     exists (select 1 from member_photos ph where ph.member_id = p.id) as "hasPhoto"
   from badges b join members p on p.id = b.member_id
-  where b.code_hash = :codeHash and b.revoked_at is null
+  where b.code_hash = $2::text and b.revoked_at is null
 ),
 required as (
   select t.id, t.name,
@@ -65,18 +84,18 @@ required as (
         cross join lateral (
           select max(s.signed_at) as latest from sign_offs s
           where s.training_id = t.id and s.signed_by = i.id
-            and s.signed_at > now() - make_interval(months => :recentMonths)
+            and s.signed_at > now() - make_interval(months => $3::int)
         ) last
         where i.active and i.role in ('instructor', 'admin') and last.latest is not null
         order by last.latest desc
-        limit :teachersNamed
+        limit $4::int
       ) recent
     ), '{}') as teachers
   from machine_trainings mt join trainings t on t.id = mt.training_id
-  where mt.machine_id = :machineId and t.active
+  where mt.machine_id = (select id from machine) and t.active
 )
 select
-  (select time_zone from shop where id = 1) as "timeZone",
+  ${by === 'station' ? '(select row_to_json(station) from station) as station,\n  ' : ''}(select time_zone from shop where id = 1) as "timeZone",
   (select row_to_json(machine) from machine) as machine,
   (select row_to_json(holder) from holder) as member,
   (select coalesce(json_agg(required order by required.name), '[]') from required) as "requiredTrainings",
@@ -96,9 +115,13 @@ select
   (
     select json_build_object('id', s.id, 'memberId', s.member_id, 'memberFirstName', p.first_name, 'startedAt', s.started_at)
     from machine_sessions s join members p on p.id = s.member_id
-    where s.machine_id = :machineId and s.ended_at is null
+    where s.machine_id = (select id from machine) and s.ended_at is null
   ) as "runningSession"
 `;
+}
+
+const FACTS_BY_MACHINE_SQL = factsSql('machine');
+const FACTS_BY_STATION_SQL = factsSql('station');
 
 interface FactsRow {
   timeZone: string | null;
@@ -110,7 +133,32 @@ interface FactsRow {
   runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: string } | null;
 }
 
+interface StationJson {
+  id: string;
+  kind: StationRecord['kind'];
+  name: string;
+  machineId: string | null;
+  pairedAt: string | null;
+  lastSeenAt: string | null;
+  revokedAt: string | null;
+  pairingExpiresAt: string | null;
+}
+
 const date = (value: string | null) => (value === null ? null : new Date(value));
+
+const factsValues = (key: string, codeHash: string | null) => [key, codeHash, TEACHER_RECENT_MONTHS, TEACHERS_NAMED];
+
+function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
+  return {
+    timeZone: row.timeZone ?? 'UTC',
+    machine,
+    member: row.member,
+    requiredTrainings: row.requiredTrainings,
+    signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),
+    supervisorOnDuty: row.supervisorOnDuty,
+    runningSession: row.runningSession ? { ...row.runningSession, startedAt: new Date(row.runningSession.startedAt) } : null,
+  };
+}
 
 const sessionColumns = {
   id: 'id',
@@ -135,23 +183,37 @@ function toSession(row: Record<string, unknown>): SessionRecord {
 export function machineSessionsRepository(db: Db) {
   return {
     async facts(machineId: string, codeHash: string | null): Promise<ScanFacts | undefined> {
-      const result = await db.raw<{ rows: FactsRow[] }>(FACTS_SQL, {
-        machineId,
-        codeHash,
-        recentMonths: TEACHER_RECENT_MONTHS,
-        teachersNamed: TEACHERS_NAMED,
-      });
-      const row = result.rows[0];
-      if (!row?.machine) return undefined;
-      return {
-        timeZone: row.timeZone ?? 'UTC',
-        machine: row.machine,
-        member: row.member,
-        requiredTrainings: row.requiredTrainings,
-        signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),
-        supervisorOnDuty: row.supervisorOnDuty,
-        runningSession: row.runningSession ? { ...row.runningSession, startedAt: new Date(row.runningSession.startedAt) } : null,
+      const [row] = await preparedRows<FactsRow>(db, 'scan_facts_by_machine', FACTS_BY_MACHINE_SQL, factsValues(machineId, codeHash));
+      return row?.machine ? toFacts(row, row.machine) : undefined;
+    },
+
+    /**
+     * The paired, unrevoked station holding the device token hash and, when it is at a machine
+     * that exists, the scan's facts; one round trip.
+     */
+    async stationFacts(deviceTokenHash: string, codeHash: string | null): Promise<{ station: StationRecord; facts: ScanFacts | null } | undefined> {
+      const [row] = await preparedRows<FactsRow & { station: StationJson | null }>(
+        db,
+        'scan_facts_by_station',
+        FACTS_BY_STATION_SQL,
+        factsValues(deviceTokenHash, codeHash),
+      );
+      if (!row?.station) return undefined;
+      const { station: s, machine } = row;
+      const station: StationRecord = {
+        id: s.id,
+        kind: s.kind,
+        name: s.name,
+        machineId: s.machineId,
+        machineName: machine?.name ?? null,
+        machineCategory: machine?.category ?? null,
+        machineRequiresPin: machine?.requiresPin ?? null,
+        pairedAt: date(s.pairedAt),
+        lastSeenAt: date(s.lastSeenAt),
+        revokedAt: date(s.revokedAt),
+        pairingExpiresAt: date(s.pairingExpiresAt),
       };
+      return { station, facts: machine ? toFacts(row, machine) : null };
     },
 
     /** Fails with a unique violation when the machine already has a running session. */

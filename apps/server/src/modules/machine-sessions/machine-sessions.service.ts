@@ -36,6 +36,9 @@ export function shopHoursAt(_now: Date): ClearanceFacts['shopHours'] {
 export const notAMachineStation = () =>
   new AppError(403, 'not_a_machine_station', 'This station is not at a machine. Badges are scanned for machine work at the machine’s own station.');
 
+export const machineNotFound = () =>
+  notFound('machine_not_found', 'This station’s machine no longer exists. An admin can set the station up again.');
+
 export const machineInUse = () =>
   conflict('machine_in_use', 'Someone else started a session on this machine a moment ago. Scan again to see who.');
 
@@ -100,7 +103,7 @@ export function machineSessionsService(deps: Deps) {
 
   async function load(machineId: string, codeHash: string | null): Promise<ScanFacts> {
     const facts = await sessions.facts(machineId, codeHash);
-    if (!facts) throw notFound('machine_not_found', 'This station’s machine no longer exists. An admin can set the station up again.');
+    if (!facts) throw machineNotFound();
     return facts;
   }
 
@@ -111,41 +114,59 @@ export function machineSessionsService(deps: Deps) {
     return { facts, member: facts.member, decision };
   }
 
+  function scanResult(station: StationRecord, facts: ScanFacts, now: Date): StationScanResult {
+    const member = facts.member;
+    const decision = member ? evaluateClearance(clearanceFacts({ ...facts, member }, facts.timeZone, now), now) : null;
+    const running = facts.runningSession;
+    const common = {
+      requiresPin: facts.machine.requiresPin,
+      safetyChecklist: facts.machine.safetyChecklist,
+    };
+    if (!member || !decision) {
+      return {
+        member: null,
+        cleared: false,
+        reasons: [unknownBadgeReason],
+        rungs: [],
+        canSupervise: false,
+        runningSession: running ? { id: running.id, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString(), own: false } : null,
+        ...common,
+      };
+    }
+    return {
+      member: {
+        id: member.id,
+        firstName: member.firstName,
+        role: member.role,
+        hasPhoto: member.hasPhoto,
+        photoToken: member.hasPhoto ? stationPhotoGrant(deps.config.SESSION_SECRET, station.id, member.id, now) : null,
+      },
+      cleared: decision.cleared,
+      reasons: decision.reasons,
+      rungs: decision.rungs,
+      canSupervise: member.active && SUPERVISING_ROLES.has(member.role),
+      runningSession: running
+        ? { id: running.id, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString(), own: running.memberId === member.id }
+        : null,
+      ...common,
+    };
+  }
+
   return {
     async scan(station: StationRecord, badge: string, now: Date): Promise<StationScanResult> {
-      const { facts, member, decision } = await decide(station, badge, now);
-      const running = facts.runningSession;
-      const common = {
-        requiresPin: facts.machine.requiresPin,
-        safetyChecklist: facts.machine.safetyChecklist,
-      };
-      if (!member || !decision) {
-        return {
-          member: null,
-          cleared: false,
-          reasons: [unknownBadgeReason],
-          rungs: [],
-          canSupervise: false,
-          runningSession: running ? { id: running.id, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString(), own: false } : null,
-          ...common,
-        };
-      }
+      return scanResult(station, await load(machineOf(station), hashOf(badge)), now);
+    },
+
+    /**
+     * A scan in one round trip: finds the paired station by its device token hash together with the
+     * facts. Undefined when no paired station holds the token.
+     */
+    async scanByDevice(deviceTokenHash: string, badge: string | null, now: Date): Promise<{ station: StationRecord; result: StationScanResult | null } | undefined> {
+      const found = await sessions.stationFacts(deviceTokenHash, badge === null ? null : hashOf(badge));
+      if (!found) return undefined;
       return {
-        member: {
-          id: member.id,
-          firstName: member.firstName,
-          role: member.role,
-          hasPhoto: member.hasPhoto,
-          photoToken: member.hasPhoto ? stationPhotoGrant(deps.config.SESSION_SECRET, station.id, member.id, now) : null,
-        },
-        cleared: decision.cleared,
-        reasons: decision.reasons,
-        rungs: decision.rungs,
-        canSupervise: member.active && SUPERVISING_ROLES.has(member.role),
-        runningSession: running
-          ? { id: running.id, memberFirstName: running.memberFirstName, startedAt: running.startedAt.toISOString(), own: running.memberId === member.id }
-          : null,
-        ...common,
+        station: found.station,
+        result: badge === null || found.station.kind !== 'machine' || !found.facts ? null : scanResult(found.station, found.facts, now),
       };
     },
 

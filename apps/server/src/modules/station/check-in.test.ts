@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { register } from 'tsx/esm/api';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { sessionEndedSchema, sessionStartedSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
+import { STATION_REQUEST_HEADER, sessionEndedSchema, sessionStartedSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
 import { dropDatabase, setupDatabase } from '@chuckkey/db';
 import { createSignOff, createTraining, createWaiverVersion, recordWaiver } from '@chuckkey/db/factories';
 import type { Deps } from '../../lib/deps';
@@ -106,7 +106,7 @@ describe('POST /api/station/scan', () => {
     expect(body.rungs.every((rung) => rung.passed)).toBe(true);
   });
 
-  it('reads the facts of a decision in one statement', async () => {
+  it('answers a scan in one statement: the station, its machine and the member together', async () => {
     const { device, member } = await arrange();
     await device.get('/api/station/state');
     const statements: string[] = [];
@@ -117,8 +117,38 @@ describe('POST /api/station/scan', () => {
     } finally {
       ctx.db.off('query', listen);
     }
-    // One to find the station by its device token, one for everything the decision needs.
-    expect(statements).toHaveLength(2);
+    expect(statements).toHaveLength(1);
+    expect(statements[0]).toContain('device_token_hash');
+  });
+
+  it('neither reads nor writes a web session', async () => {
+    const { device, member } = await arrange();
+    const sessionsBefore = await ctx.db('web_sessions').count<{ count: string }[]>({ count: '*' });
+    const res = await device.agent
+      .post('/api/station/scan')
+      .set('x-forwarded-for', device.ip)
+      .set(STATION_REQUEST_HEADER, '1')
+      .send({ badge: member.badge });
+    expect(res.status).toBe(200);
+    expect(res.headers['set-cookie'] ?? []).not.toEqual(expect.arrayContaining([expect.stringMatching(/^chuckkey\.sid=/)]));
+    expect(await ctx.db('web_sessions').count<{ count: string }[]>({ count: '*' })).toEqual(sessionsBefore);
+  });
+
+  it('a web session’s CSRF token alone does not pass: station writes need the station header', async () => {
+    const { device, member } = await arrange();
+    const res = await device.agent.post('/api/station/scan').set('x-forwarded-for', device.ip).set('x-csrf-token', device.token).send({ badge: member.badge });
+    expect(res.status).toBe(403);
+    expect(res.body.code).toBe('csrf_invalid');
+  });
+
+  it('bad input from a paired station answers 400; from an unpaired device, 401', async () => {
+    const { device } = await arrange();
+    const paired = await device.post('/api/station/scan', { badge: '' });
+    expect(paired.status).toBe(400);
+    expect(paired.body.errors.badge).toBeDefined();
+    const unpaired = await (await browser(ctx)).post('/api/station/scan', { badge: '' });
+    expect(unpaired.status).toBe(401);
+    expect(unpaired.body.code).toBe('station_required');
   });
 
   it('a member without the sign-off is told which training and who teaches it', async () => {
@@ -225,6 +255,9 @@ describe('POST /api/station/scan', () => {
     for (let i = 0; i < SCANS_PER_MINUTE; i += 1) await device.post('/api/station/scan', { badge: 'q'.repeat(22) });
     const res = await device.post('/api/station/scan', { badge: 'q'.repeat(22) });
     expect(res.status).toBe(429);
+    // RFC 9110 §10.2.3: delay-seconds, here at most the one-minute window.
+    expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
+    expect(Number(res.headers['retry-after'])).toBeLessThanOrEqual(60);
     // Another station is not held up.
     const other = await pairedDevice(ctx);
     expect((await other.device.post('/api/station/scan', { badge: 'q'.repeat(22) })).status).toBe(200);

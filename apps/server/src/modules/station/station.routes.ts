@@ -14,10 +14,10 @@ import { z } from 'zod';
 import type { Deps } from '../../lib/deps';
 import { perAddressLimit } from '../../lib/rate-limit';
 import { AppError } from '../../lib/errors';
-import { parse } from '../../lib/validate';
-import { currentStation, requireStation, setStationCookie } from '../../middleware/station-auth';
+import { parse, ValidationError, zodFieldErrors } from '../../lib/validate';
+import { currentStation, deviceKey, requireStation, setStationCookie, stationFromRequest } from '../../middleware/station-auth';
 import { badgesService } from '../badges/badges.service';
-import { machineSessionsService, stationPhotoAllowed } from '../machine-sessions/machine-sessions.service';
+import { machineNotFound, machineSessionsService, notAMachineStation, stationPhotoAllowed } from '../machine-sessions/machine-sessions.service';
 import { stationService } from './station.service';
 
 /**
@@ -29,8 +29,9 @@ export const SCANS_PER_MINUTE = 60;
 const sessionParams = z.object({ id: z.uuid({ error: 'Not a session id.' }) });
 
 /**
- * What a paired device may do. These routes keep CSRF protection like the rest of the API: the
- * kiosk fetches its token from GET /api/auth/csrf, which works without anyone signed in.
+ * What a paired device may do. These routes run without the web session (a station is no
+ * person's sign-in): app.ts mounts them before it, with their own CSRF defence
+ * (middleware/station-csrf.ts).
  */
 export function stationRoutes(deps: Deps): Router {
   const service = stationService(deps);
@@ -39,10 +40,17 @@ export function stationRoutes(deps: Deps): Router {
   const scanLimit = rateLimit({
     windowMs: 60_000,
     limit: deps.config.STATION_SCAN_LIMIT_PER_MINUTE,
-    standardHeaders: 'draft-8',
+    // No RateLimit headers on every scan: a station never reads them, and making them (the draft-8
+    // form hashes a partition key) was a measurable share of a scan's cost. A refusal says Retry-After.
+    standardHeaders: false,
     legacyHeaders: false,
-    keyGenerator: (req) => currentStation(req).id,
-    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', 'Too many scans at this station. Wait a minute and try again.')),
+    // Scans are limited before the station is looked up, so by device token (hashed) rather than station id.
+    keyGenerator: deviceKey,
+    handler: (req, res, next) => {
+      const resetTime = (req as typeof req & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+      res.setHeader('Retry-After', String(Math.max(1, Math.ceil(((resetTime?.getTime() ?? Date.now() + 60_000) - Date.now()) / 1000))));
+      next(new AppError(429, 'too_many_requests', 'Too many scans at this station. Wait a minute and try again.'));
+    },
   });
   const router = Router();
 
@@ -55,6 +63,23 @@ export function stationRoutes(deps: Deps): Router {
     const { token, stationId } = await service.pair(pairingCode);
     setStationCookie(deps.config, req, res, token);
     res.json(await service.self(stationId));
+  });
+
+  // The scan looks up its station together with the facts, in one round trip, so it comes
+  // before the general device check.
+  router.post('/scan', scanLimit, async (req, res) => {
+    const parsed = stationScanSchema.safeParse(req.body ?? {});
+    const badge = parsed.success ? parsed.data.badge : null;
+    let found: Awaited<ReturnType<typeof sessions.scanByDevice>>;
+    const station = await stationFromRequest(deps, req, res, async (hash) => {
+      found = await sessions.scanByDevice(hash, badge, new Date());
+      return found?.station;
+    });
+    // A paired station hears about its bad input; an unpaired device heard station_required above.
+    if (!parsed.success) throw new ValidationError('body', zodFieldErrors(parsed.error));
+    if (station.kind !== 'machine') throw notAMachineStation();
+    if (!found?.result) throw machineNotFound();
+    res.json(found.result);
   });
 
   router.use(requireStation(deps));
@@ -80,11 +105,6 @@ export function stationRoutes(deps: Deps): Router {
   router.post('/sign-offs', async (req, res) => {
     const input = parse(stationSignOffSchema, req.body, 'body');
     res.status(201).json(await service.signOff(currentStation(req), input));
-  });
-
-  router.post('/scan', scanLimit, async (req, res) => {
-    const { badge } = parse(stationScanSchema, req.body, 'body');
-    res.json(await sessions.scan(currentStation(req), badge, new Date()));
   });
 
   const photoQuery = z.object({ t: z.string().max(200) });

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { STATION_COOKIE, signOffSchema, stationInstructorResultSchema, stationSelfSchema } from '@chuckkey/core';
+import { STATION_COOKIE, STATION_REQUEST_HEADER, signOffSchema, stationInstructorResultSchema, stationSelfSchema } from '@chuckkey/core';
 import { createBadge, createTraining } from '@chuckkey/db/factories';
 import { browser, createTestContext, signedIn, type Browser, type TestContext } from '../../test/harness';
 import { badgeHolder, createStation, pairedDevice } from './station.fixtures';
@@ -62,7 +62,7 @@ describe('POST /api/station/pair', () => {
       .post('/api/station/pair')
       .set('x-forwarded-for', device.ip)
       .set('x-forwarded-proto', 'https')
-      .set('x-csrf-token', device.token)
+      .set(STATION_REQUEST_HEADER, '1')
       .send({ pairingCode: station.pairingCode });
 
     expect(res.status).toBe(200);
@@ -130,7 +130,7 @@ describe('POST /api/station/pair', () => {
     expect(statuses[10]).toBe(429);
   });
 
-  it('keeps CSRF protection: without the token the request is refused', async () => {
+  it('keeps CSRF protection: without the station request header pairing is refused', async () => {
     const { station } = await createStation(ctx);
     const device = await browser(ctx);
     const res = await device.agent.post('/api/station/pair').set('x-forwarded-for', device.ip).send({ pairingCode: station.pairingCode });
@@ -246,7 +246,7 @@ describe('GET /api/station and the heartbeat', () => {
     expect(second.getTime()).toBe(first.getTime());
   });
 
-  it('keeps CSRF protection on the heartbeat', async () => {
+  it('keeps CSRF protection on the heartbeat: no station request header, no answer', async () => {
     const { device } = await pairedDevice(ctx);
     const res = await device.agent.post('/api/station/heartbeat').set('x-forwarded-for', device.ip);
     expect(res.status).toBe(403);

@@ -1,5 +1,6 @@
 import type { MachineCategory, Station } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
+import { preparedRows } from '../../lib/prepared';
 
 type StationKind = Station['kind'];
 
@@ -30,6 +31,11 @@ const columns = {
   revokedAt: 'stations.revoked_at',
   pairingExpiresAt: 'stations.pairing_expires_at',
 } as const;
+
+const STATION_BY_DEVICE_TOKEN_SQL = `
+select ${Object.entries(columns).map(([alias, column]) => `${column} as "${alias}"`).join(', ')}
+from stations left join machines on machines.id = stations.machine_id
+where stations.device_token_hash = $1`;
 
 const iso = (date: Date | null) => (date ? date.toISOString() : null);
 
@@ -84,8 +90,9 @@ export function stationsRepository(db: Db) {
       return row;
     },
 
+    /** Asked on every station request, so prepared once per connection (lib/prepared). */
     async findByDeviceTokenHash(hash: string): Promise<StationRecord | undefined> {
-      const [row] = await selectStations().where('stations.device_token_hash', hash);
+      const [row] = await preparedRows<StationRecord>(db, 'station_by_device_token', STATION_BY_DEVICE_TOKEN_SQL, [hash]);
       return row;
     },
 

@@ -29,7 +29,6 @@ function fakeServer() {
   const fetchImpl: typeof fetch = async (input, init) => {
     const url = String(input);
     if (server.mode === 'down') throw new TypeError('fetch failed');
-    if (url === '/api/auth/csrf') return Response.json({ token: 'tok' });
     const body = JSON.parse(String(init?.body)) as Record<string, unknown>;
     sent.push({ url, body });
     if (server.mode === 502) return new Response('Bad gateway', { status: 502 });
