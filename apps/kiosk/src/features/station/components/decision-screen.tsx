@@ -11,11 +11,14 @@ export const OUTCOME_IDLE_MS = 20_000;
 /** The answer to a member's badge: who, the rule ladder, and what they can do next. */
 export function DecisionScreen({
   answer,
+  changed = false,
   onContinue,
   onEndOwn,
   onDone,
 }: {
   answer: StationScanResult;
+  /** Shown again because the server refused to start after the safety check. */
+  changed?: boolean;
   onContinue: () => void;
   onEndOwn: () => void;
   onDone: () => void;
@@ -63,6 +66,13 @@ export function DecisionScreen({
           </p>
         </div>
       </div>
+
+      {changed ? (
+        <p role="alert" className="flex items-center gap-4 rounded-xl border-4 border-link-down px-6 py-3 text-kiosk-lead font-bold text-balance">
+          <Icon name="warning" className="size-12 text-link-down" />
+          <span>Something changed since your scan, so the session did not start. Here is the answer now.</span>
+        </p>
+      ) : null}
 
       {running && !running.own ? (
         <p className="flex items-center gap-4 rounded-xl border-4 border-link-down px-6 py-3 text-kiosk-lead text-balance">

@@ -27,6 +27,7 @@ export function SafetyCheck({
   checklist,
   requiresPin,
   onStarted,
+  onRefused,
   onCancel,
 }: {
   badge: string;
@@ -35,6 +36,8 @@ export function SafetyCheck({
   checklist: ChecklistItem[];
   requiresPin: boolean;
   onStarted: (session: SessionStarted) => void;
+  /** The server no longer clears the member (a tag-out, the shop closing, a supervisor leaving). */
+  onRefused: () => void;
   onCancel: () => void;
 }) {
   useIdleReturn(SAFETY_IDLE_MS, onCancel);
@@ -59,6 +62,10 @@ export function SafetyCheck({
       {
         onSuccess: onStarted,
         onError: (error) => {
+          if (isApiError(error, 409) && error.code === 'not_cleared') {
+            onRefused();
+            return;
+          }
           if (isApiError(error, 401) && error.code === 'wrong_pin') setPin(null);
           setMessage(startMessage(error));
         },

@@ -23,7 +23,7 @@ import { StationHeader } from './station-header';
 
 type Screen =
   | { name: 'idle' }
-  | { name: 'decision'; badge: string; answer: StationScanResult }
+  | { name: 'decision'; badge: string; answer: StationScanResult; changed?: boolean }
   | { name: 'instructor-menu'; instructor: ScannedInstructor; answer: StationScanResult }
   | { name: 'duty'; instructor: ScannedInstructor }
   | { name: 'sign-off'; instructor: ScannedInstructor }
@@ -70,15 +70,19 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
   const gone = (id: string) => endedIds.has(id) || pending.some((kept) => kept.sessionId === id);
   const running = candidate && !gone(candidate.id) ? candidate : null;
 
-  const scan = (badge: string) => {
+  /** `changed`: the server refused a start after this badge was cleared, so the answer is asked again. */
+  const scan = (badge: string, changed = false) => {
     setMessage(null);
     scanner.mutate(badge, {
       onSuccess: (answer) => {
-        if (answer.member && answer.canSupervise) {
+        if (answer.member && answer.canSupervise && !changed) {
           setScreen({ name: 'instructor-menu', instructor: { badge, id: answer.member.id, firstName: answer.member.firstName }, answer });
-        } else setScreen({ name: 'decision', badge, answer });
+        } else setScreen({ name: 'decision', badge, answer, changed });
       },
-      onError: (error) => setMessage(scanMessage(error)),
+      onError: (error) => {
+        setScreen({ name: 'idle' });
+        setMessage(scanMessage(error));
+      },
     });
   };
 
@@ -149,6 +153,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
         {screen.name === 'decision' ? (
           <DecisionScreen
             answer={screen.answer}
+            changed={screen.changed ?? false}
             onContinue={() => setScreen({ name: 'safety', badge: screen.badge, answer: screen.answer })}
             onEndOwn={() => {
               if (screen.answer.runningSession) void endSession(screen.answer.runningSession.id, screen.badge);
@@ -199,6 +204,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
             checklist={screen.answer.safetyChecklist}
             requiresPin={screen.answer.requiresPin}
             onStarted={onStarted}
+            onRefused={() => scan(screen.badge, true)}
             onCancel={toIdle}
           />
         ) : null}
