@@ -1,6 +1,6 @@
 import type { APIRequestContext, Page } from '@playwright/test';
 import { stationWithCodeSchema, type StationWithCode } from '@chuckkey/core';
-import type { CreatedMember } from '@chuckkey/db/factories';
+import { createWaiverVersion, recordWaiver, type CreatedMember } from '@chuckkey/db/factories';
 import type { Knex } from 'knex';
 import { expect } from './fixtures';
 
@@ -39,4 +39,23 @@ export async function removeStationRows(db: Knex, rows: { people: string[]; stat
   if (rows.stationId) await db('stations').where({ id: rows.stationId }).delete();
   await db('machines').where({ id: rows.machine.id }).delete();
   await db('areas').where({ id: rows.machine.area_id }).delete();
+}
+
+/** Uses the station's on-screen fallback: types the badge code as a member would. */
+export async function typeBadge(page: Page, code: string): Promise<void> {
+  await page.getByRole('button', { name: 'Type badge code' }).click();
+  await page.getByLabel('Badge code').fill(code);
+  await page.getByRole('button', { name: 'Use this code' }).click();
+}
+
+/**
+ * The member accepts the waiver in force; one is published only if the shop has none yet.
+ * Returns the version published here (to delete afterwards), or null.
+ */
+export async function withCurrentWaiver(db: Knex, member: CreatedMember): Promise<number | null> {
+  const newest = await db('waiver_versions').max<{ max: number | null }>({ max: 'version' }).first();
+  const created = newest?.max ? null : await createWaiverVersion(db);
+  const version = newest?.max ?? created?.version ?? 1;
+  await recordWaiver(db, { memberId: member.id, version, typedName: `${member.first_name} ${member.last_name}` });
+  return created ? created.version : null;
 }

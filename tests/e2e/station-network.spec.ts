@@ -4,27 +4,12 @@ import {
   createMachine,
   createSignOff,
   createTraining,
-  createWaiverVersion,
-  recordWaiver,
   type CreatedMember,
   type createMember,
 } from '@chuckkey/db/factories';
 import type { Knex } from 'knex';
 import { expect, test } from './fixtures';
-import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows } from './station-fixtures';
-
-async function typeBadge(page: Page, code: string) {
-  await page.getByRole('button', { name: 'Type badge code' }).click();
-  await page.getByLabel('Badge code').fill(code);
-  await page.getByRole('button', { name: 'Use this code' }).click();
-}
-
-async function withCurrentWaiver(db: Knex, member: CreatedMember): Promise<number | null> {
-  const newest = await db('waiver_versions').max<{ max: number | null }>({ max: 'version' }).first();
-  const created = newest?.max ? null : await createWaiverVersion(db);
-  await recordWaiver(db, { memberId: member.id, version: newest?.max ?? created?.version ?? 1, typedName: `${member.first_name} ${member.last_name}` });
-  return created ? created.version : null;
-}
+import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, typeBadge, withCurrentWaiver } from './station-fixtures';
 
 const safetyChecklist = [{ id: 'work-is-tight', label: 'The work is tight in the chuck and the chuck key is out' }];
 

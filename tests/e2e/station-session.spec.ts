@@ -1,25 +1,8 @@
-import type { Page } from '@playwright/test';
 import { hashPassword } from '@chuckkey/db';
-import { createBadge, createMachine, createSignOff, createTraining, createWaiverVersion, recordWaiver, type CreatedMember } from '@chuckkey/db/factories';
-import type { Knex } from 'knex';
+import { createBadge, createMachine, createSignOff, createTraining } from '@chuckkey/db/factories';
 import { expectNoWcagViolations } from './axe';
 import { expect, test } from './fixtures';
-import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows } from './station-fixtures';
-
-async function typeBadge(page: Page, code: string) {
-  await page.getByRole('button', { name: 'Type badge code' }).click();
-  await page.getByLabel('Badge code').fill(code);
-  await page.getByRole('button', { name: 'Use this code' }).click();
-}
-
-/** The member accepts the waiver in force; one is published only if the shop has none yet. */
-async function withCurrentWaiver(db: Knex, member: CreatedMember): Promise<number | null> {
-  const newest = await db('waiver_versions').max<{ max: number | null }>({ max: 'version' }).first();
-  const created = newest?.max ? null : await createWaiverVersion(db);
-  const version = newest?.max ?? created?.version ?? 1;
-  await recordWaiver(db, { memberId: member.id, version, typedName: `${member.first_name} ${member.last_name}` });
-  return created ? created.version : null;
-}
+import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, typeBadge, withCurrentWaiver } from './station-fixtures';
 
 const safetyChecklist = [
   { id: 'guards-in-place', label: 'The chuck guard is closed and the way guards are in place' },

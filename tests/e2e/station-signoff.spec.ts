@@ -1,16 +1,9 @@
 import { hashPassword } from '@chuckkey/db';
 import { createBadge, createMachine, createTraining, type CreatedMember } from '@chuckkey/db/factories';
 import type { Knex } from 'knex';
-import type { Page } from '@playwright/test';
 import { expectNoWcagViolations } from './axe';
 import { expect, test } from './fixtures';
-import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows } from './station-fixtures';
-
-async function typeBadge(page: Page, code: string) {
-  await page.getByRole('button', { name: 'Type badge code' }).click();
-  await page.getByLabel('Badge code').fill(code);
-  await page.getByRole('button', { name: 'Use this code' }).click();
-}
+import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, typeBadge } from './station-fixtures';
 
 async function withPin(db: Knex, member: CreatedMember, pin: string) {
   // As PUT /api/profile/pin stores it: an argon2id hash.
