@@ -21,7 +21,10 @@ export default defineConfig({
     emptyOutDir: true,
   },
   test: {
-    environment: 'node',
-    include: ['src/**/*.test.ts'],
+    // Plain logic runs in Node; whatever renders (*.test.tsx) gets a document from jsdom.
+    projects: [
+      { extends: true, test: { name: 'node', environment: 'node', include: ['src/**/*.test.ts'] } },
+      { extends: true, test: { name: 'dom', environment: 'jsdom', include: ['src/**/*.test.tsx'], setupFiles: ['src/testing/dom-setup.ts'] } },
+    ],
   },
 });

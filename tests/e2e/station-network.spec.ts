@@ -9,6 +9,7 @@ import {
 } from '@chuckkey/db/factories';
 import type { Knex } from 'knex';
 import { expect, test } from './fixtures';
+import { openShopForEachTest } from './shop-hours';
 import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, typeBadge, withCurrentWaiver } from './station-fixtures';
 
 const safetyChecklist = [{ id: 'work-is-tight', label: 'The work is tight in the chuck and the chuck key is out' }];
@@ -52,6 +53,9 @@ async function toSafetyCheck(page: Page, badge: string, firstName: string) {
 }
 
 test.describe('a station when things change or the network fails', () => {
+  // Clearance needs the shop open; the database may be the demo shop's, with its hours.
+  openShopForEachTest(test);
+
   test('a start the server refuses after the scan shows the answer again, with the reason', async ({ page, db, createUser }) => {
     const shop = await arrange(page, db, createUser, 'Rosalind');
     try {

@@ -2,6 +2,7 @@ import { hashPassword } from '@chuckkey/db';
 import { createBadge, createMachine, createSignOff, createTraining } from '@chuckkey/db/factories';
 import { expectNoWcagViolations } from './axe';
 import { expect, test } from './fixtures';
+import { openShopForEachTest } from './shop-hours';
 import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, typeBadge, withCurrentWaiver } from './station-fixtures';
 
 const safetyChecklist = [
@@ -10,6 +11,9 @@ const safetyChecklist = [
 ];
 
 test.describe('a machine station checks clearance and runs a session', () => {
+  // Clearance needs the shop open; the database may be the demo shop's, with its hours.
+  openShopForEachTest(test);
+
   test('a member without the sign-off sees the missing training on the rule ladder', async ({ page, db, createUser }) => {
     const admin = await createUser({ role: 'admin' });
     const member = await createUser({ role: 'member', first_name: 'Ottoline' });

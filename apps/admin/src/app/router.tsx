@@ -44,6 +44,7 @@ export function createAppRouter() {
             { path: paths.setupTraining.path, lazy: page(() => import('./routes/setup-training-edit')) },
             { path: paths.setupStations.path, lazy: page(() => import('./routes/setup-stations')) },
             { path: paths.setupWaiver.path, lazy: page(() => import('./routes/setup-waiver')) },
+            { path: paths.setupHours.path, lazy: page(() => import('./routes/setup-hours')) },
             { path: paths.outbox.path, lazy: page(() => import('./routes/outbox')) },
             { path: '*', lazy: page(() => import('./routes/not-found')) },
           ],

@@ -1,5 +1,6 @@
 import { useEffect, useId, useRef } from 'react';
 import { checklistItemSchema } from '@chuckkey/core';
+import type { FieldErrors } from 'react-hook-form';
 import { moveItem, newDraftKey, type ChecklistDraftItem } from '../lib/checklist';
 import { Button } from './ui/button';
 import { cn } from './ui/cn';
@@ -17,6 +18,17 @@ interface ChecklistEditorProps {
   error?: string | undefined;
   itemErrors?: (string | undefined)[];
   addLabel?: string;
+}
+
+/** A checklist field's errors as react-hook-form keeps them: for the whole list, or per item. */
+export type ChecklistFieldErrors = FieldErrors<{ items: ChecklistDraftItem[] }>['items'];
+
+/** Puts a checklist field's errors where the editor shows them: under the list, or under an item. */
+export function checklistErrorProps(errors: ChecklistFieldErrors): Pick<ChecklistEditorProps, 'error' | 'itemErrors'> {
+  return {
+    error: errors?.message ?? errors?.root?.message,
+    itemErrors: Array.isArray(errors) ? errors.map((item) => item?.label?.message) : [],
+  };
 }
 
 type Focus = { key: string; control: 'label' | 'up' | 'down' } | { key: null; control: 'add' };

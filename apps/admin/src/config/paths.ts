@@ -43,6 +43,7 @@ export const paths = {
   },
   setupStations: { path: '/setup/stations', getHref: () => '/setup/stations' },
   setupWaiver: { path: '/setup/waiver', getHref: () => '/setup/waiver' },
+  setupHours: { path: '/setup/hours', getHref: () => '/setup/hours' },
   outbox: { path: '/outbox', getHref: () => '/outbox' },
 } as const;
 

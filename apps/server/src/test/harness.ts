@@ -74,6 +74,7 @@ export async function browser(ctx: TestContext, ip = clientAddress()) {
     post: (path: string, body?: object) => agent.post(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1').send(body),
     put: (path: string, body?: object) => agent.put(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1').send(body),
     patch: (path: string, body?: object) => agent.patch(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1').send(body),
+    delete: (path: string) => agent.delete(path).set('x-forwarded-for', ip).set('x-csrf-token', token).set(STATION_REQUEST_HEADER, '1'),
   };
 }
 export type Browser = Awaited<ReturnType<typeof browser>>;

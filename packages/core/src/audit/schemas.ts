@@ -13,6 +13,9 @@ export const auditActions = [
   'station.created',
   'station.paired',
   'station.revoked',
+  'shop.hours_changed',
+  'shop.closure_added',
+  'shop.closure_removed',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

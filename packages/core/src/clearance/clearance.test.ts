@@ -346,6 +346,23 @@ describe('evaluateClearance()', () => {
       ]);
     });
 
+    it('when a closure covers today, the member is told its reason and the next opening', () => {
+      // Saturday 14 March 2026, 9:00 CDT (IANA tz database: UTC−5 after 8 March).
+      const closure = { open: false, opensAt: new Date('2026-03-14T14:00:00Z'), closesAt: null, closure: { reason: 'Winter deep clean' } };
+
+      expect(evaluateClearance(facts({ shopHours: closure }), NOW).reasons).toEqual([
+        {
+          code: 'shop_closed',
+          rule: 7,
+          message: 'The shop is closed today: Winter deep clean.',
+          nextStep: 'Come back when the shop opens, Saturday 9:00.',
+        },
+      ]);
+      expect(evaluateClearance(facts({ shopHours: { ...closure, closure: { reason: 'Stocktaking!' } } }), NOW).reasons[0]?.message).toBe(
+        'The shop is closed today: Stocktaking!',
+      );
+    });
+
     it('when the shop is closed and no hours are known, the member is told to come back during opening hours', () => {
       expect(evaluateClearance(facts({ shopHours: { open: false } }), NOW).reasons[0]).toMatchObject({
         message: 'The shop is closed now.',

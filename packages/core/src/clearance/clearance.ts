@@ -47,7 +47,8 @@ export interface ClearanceFacts {
   supervisorOnDuty: { firstName: string } | null;
   runningSession: { memberId: string; memberFirstName: string; startedAt: Date } | null;
   upcomingReservations: { memberId: string; startsAt: Date; released: boolean }[];
-  shopHours: { open: boolean; opensAt?: Date | null; closesAt?: Date | null };
+  /** As `shopHoursAt` in shop/hours.ts answers it; `closure` is the closure covering today, if one does. */
+  shopHours: { open: boolean; opensAt?: Date | null; closesAt?: Date | null; closure?: { reason: string } | null };
   /** Both limits are off (null) unless the shop sets them. */
   policies: {
     overdueCheckoutBlockDays: number | null;
@@ -226,7 +227,11 @@ function reservations({ member, machine, upcomingReservations }: ClearanceFacts,
 
 function shopOpen({ member, shopHours }: ClearanceFacts, say: Wording): ClearanceReason[] {
   if (shopHours.open || isSupervisor(member.role)) return [];
-  const message = shopHours.closesAt ? `The shop closed at ${say.when(shopHours.closesAt)}.` : 'The shop is closed now.';
+  const message = shopHours.closure
+    ? `The shop is closed today: ${sentence(shopHours.closure.reason)}`
+    : shopHours.closesAt
+      ? `The shop closed at ${say.when(shopHours.closesAt)}.`
+      : 'The shop is closed now.';
   const nextStep = shopHours.opensAt
     ? `Come back when the shop opens, ${say.when(shopHours.opensAt)}.`
     : 'Come back during opening hours.';
@@ -268,6 +273,12 @@ function money(cents: number, currency: string | undefined): string {
   return currency
     ? new Intl.NumberFormat('en', { style: 'currency', currency, currencyDisplay: 'narrowSymbol' }).format(amount)
     : amount.toFixed(2);
+}
+
+/** An admin's wording ends with a full stop, whether or not they typed one. */
+function sentence(text: string): string {
+  const trimmed = text.trim();
+  return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
 }
 
 /** "Tobias", "Tobias or Bettina", "Tobias, Bettina or Ines". */

@@ -24,7 +24,7 @@ describe('can()', () => {
       expect(can('instructor', permission), permission).toBe(true);
       expect(can('member', permission), permission).toBe(false);
     }
-    for (const permission of ['read:member:any', 'update:member:any', 'manage:training:any', 'read:audit:any'] as const) {
+    for (const permission of ['read:member:any', 'update:member:any', 'manage:training:any', 'manage:shop:any', 'read:audit:any'] as const) {
       expect(can('instructor', permission), permission).toBe(false);
     }
   });

@@ -41,6 +41,7 @@ export const permissions = [
   'manage:badge:any',
   'manage:waiver:any',
   'manage:station:any',
+  'manage:shop:any',
   'read:audit:any',
 ] as const;
 export type Permission = (typeof permissions)[number];

@@ -6,6 +6,7 @@ const items: { label: string; to: string; permission: Permission }[] = [
   { label: 'Machines', to: paths.setupMachines.getHref(), permission: 'manage:machine:any' },
   { label: 'Trainings', to: paths.setupTrainings.getHref(), permission: 'manage:training:any' },
   { label: 'Stations', to: paths.setupStations.getHref(), permission: 'manage:station:any' },
+  { label: 'Shop hours', to: paths.setupHours.getHref(), permission: 'manage:shop:any' },
   { label: 'Waiver', to: paths.setupWaiver.getHref(), permission: 'manage:waiver:any' },
 ];
 

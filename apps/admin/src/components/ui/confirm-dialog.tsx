@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { Alert } from './alert';
 import { Button, type ButtonVariant } from './button';
 import { Dialog } from './dialog';
+import { DialogActions } from './form-actions';
 
 interface ConfirmDialogProps {
   open: boolean;
@@ -37,14 +38,11 @@ export function ConfirmDialog({
       onClose={onCancel}
     >
       {error && <Alert tone="error">{error}</Alert>}
-      <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-        <Button variant="secondary" onClick={onCancel} disabled={pending}>
-          Cancel
-        </Button>
+      <DialogActions pending={pending} onCancel={onCancel}>
         <Button variant={confirmVariant} onClick={onConfirm} pending={pending}>
           {confirmLabel}
         </Button>
-      </div>
+      </DialogActions>
     </Dialog>
   );
 }

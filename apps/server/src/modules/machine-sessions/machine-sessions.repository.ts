@@ -1,4 +1,4 @@
-import type { ChecklistItem, MachineCategory, Role, SignOffLevel } from '@chuckkey/core';
+import { OPENING_LOOKAHEAD_DAYS, type ChecklistItem, type ClosureDays, type MachineCategory, type Role, type SignOffLevel, type WeeklyHours } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 import { preparedRows } from '../../lib/prepared';
 import type { StationRecord } from '../stations/stations.repository';
@@ -15,6 +15,10 @@ export interface ScanFacts {
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: Date | null; revokedAt: Date | null }[];
   supervisorOnDuty: { firstName: string } | null;
   runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: Date } | null;
+  /** The shop's weekly opening hours, wall-clock 'HH:MM' in its time zone; none set means open at all times. */
+  weeklyHours: WeeklyHours[];
+  /** Closures around today, 'YYYY-MM-DD' in the shop's calendar. */
+  closures: ClosureDays[];
 }
 
 export interface SessionRecord {
@@ -29,6 +33,13 @@ export interface SessionRecord {
   hours: number | null;
 }
 
+/**
+ * Closures read for a scan: those touching the days from yesterday to this many days ahead of the
+ * database's date. That spans the days shopHoursAt looks at (the shop's today and 15 after), with a
+ * day to spare either side, since the shop's date may be a day off the database's.
+ */
+const CLOSURE_DAYS_AHEAD = OPENING_LOOKAHEAD_DAYS + 2;
+
 /** Instructors named as teachers of a training: those who signed it off in this many months. */
 export const TEACHER_RECENT_MONTHS = 24;
 export const TEACHERS_NAMED = 3;
@@ -37,8 +48,9 @@ export const TEACHERS_NAMED = 3;
  * One statement: the member behind the badge hash (active badge only), whether they accepted the
  * current waiver version, the machine's active required trainings with the first names of up to
  * three instructors who signed each off lately, the member's sign-offs for those trainings in any
- * state, a supervisor on duty and the machine's running session. With no badge hash (null) the
- * member parts come back empty. The shop's time zone comes along for the wording of times.
+ * state, a supervisor on duty, the machine's running session, and the shop's weekly hours and the
+ * closures around today (rule 7). With no badge hash (null) the member parts come back empty. The
+ * shop's time zone comes along for the wording of times and for deciding whether the shop is open.
  *
  * Two forms: by machine id, and by a station's device token hash, which also answers the station
  * (so a scan is a single round trip: credential, machine and member at once). Parameters are $1
@@ -116,7 +128,17 @@ select
     select json_build_object('id', s.id, 'memberId', s.member_id, 'memberFirstName', p.first_name, 'startedAt', s.started_at)
     from machine_sessions s join members p on p.id = s.member_id
     where s.machine_id = (select id from machine) and s.ended_at is null
-  ) as "runningSession"
+  ) as "runningSession",
+  (
+    select coalesce(json_agg(json_build_object(
+      'weekday', h.weekday, 'opensAt', to_char(h.opens_at, 'HH24:MI'), 'closesAt', to_char(h.closes_at, 'HH24:MI'))), '[]')
+    from shop_hours h
+  ) as "weeklyHours",
+  (
+    select coalesce(json_agg(json_build_object('startsOn', c.starts_on, 'endsOn', c.ends_on, 'reason', c.reason)), '[]')
+    from shop_closures c
+    where c.ends_on >= current_date - 1 and c.starts_on <= current_date + ${CLOSURE_DAYS_AHEAD}
+  ) as "closures"
 `;
 }
 
@@ -131,6 +153,8 @@ interface FactsRow {
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: string | null; revokedAt: string | null }[];
   supervisorOnDuty: ScanFacts['supervisorOnDuty'];
   runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: string } | null;
+  weeklyHours: WeeklyHours[];
+  closures: ClosureDays[];
 }
 
 interface StationJson {
@@ -157,6 +181,8 @@ function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
     signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),
     supervisorOnDuty: row.supervisorOnDuty,
     runningSession: row.runningSession ? { ...row.runningSession, startedAt: new Date(row.runningSession.startedAt) } : null,
+    weeklyHours: row.weeklyHours,
+    closures: row.closures,
   };
 }
 

@@ -3,6 +3,7 @@ import {
   evaluateClearance,
   HEARTBEAT_SILENCE_MINUTES,
   OFFLINE_END_MAX_HOURS,
+  shopHoursAt,
   unknownBadgeReason,
   type ClearanceFacts,
   type SessionEnd,
@@ -24,14 +25,6 @@ const SUPERVISING_ROLES = new Set(['instructor', 'admin']);
 const HOUR_MS = 3_600_000;
 /** A station's clock may run a little ahead of the server's; an end "from the future" within this is taken as now. */
 const CLOCK_SKEW_MS = 60_000;
-
-/**
- * Whether the shop is open is part of every decision. Opening hours and closures are not kept yet
- * (the hours setting arrives later), so the shop counts as open at all times until then.
- */
-export function shopHoursAt(_now: Date): ClearanceFacts['shopHours'] {
-  return { open: true };
-}
 
 export const notAMachineStation = () =>
   new AppError(403, 'not_a_machine_station', 'This station is not at a machine. Badges are scanned for machine work at the machine’s own station.');
@@ -55,7 +48,8 @@ function hashOf(badge: string): string | null {
 
 /**
  * The tag-out, maintenance, reservation, crib and balance facts are empty because the shop keeps
- * none of those records yet; the rules for them are already in the decision.
+ * none of those records yet; the rules for them are already in the decision. Whether the shop is
+ * open comes from its hours and closures, read with the other facts, in its time zone.
  */
 function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['member']> }, timeZone: string, now: Date): ClearanceFacts {
   return {
@@ -72,7 +66,7 @@ function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['memb
     supervisorOnDuty: facts.supervisorOnDuty,
     runningSession: facts.runningSession,
     upcomingReservations: [],
-    shopHours: shopHoursAt(now),
+    shopHours: shopHoursAt(facts.weeklyHours, facts.closures, timeZone, now),
     policies: { overdueCheckoutBlockDays: null, overdueCheckouts: [], balanceLimitCents: null, balanceCents: 0 },
   };
 }

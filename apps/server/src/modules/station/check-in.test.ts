@@ -64,6 +64,19 @@ async function start(device: Awaited<ReturnType<typeof arrange>>['device'], hold
   return device.post('/api/station/sessions', { badge: holder.badge, checklist: ALL_ITEMS, ...extra });
 }
 
+/** Scans and returns the answer with every statement the database was sent meanwhile. */
+async function scanCountingStatements(device: Awaited<ReturnType<typeof arrange>>['device'], badge: string) {
+  const statements: string[] = [];
+  const listen = (query: { sql: string }) => statements.push(query.sql);
+  ctx.db.on('query', listen);
+  try {
+    const res = await device.post('/api/station/scan', { badge });
+    return { statements, answer: stationScanResultSchema.parse(res.body) };
+  } finally {
+    ctx.db.off('query', listen);
+  }
+}
+
 /** Ends any open duty shifts so that the supervision rule is tested from a known state. */
 async function nobodyOnDuty() {
   await ctx.db('duty_shifts').whereNull('ended_at').update({ ended_at: ctx.db.fn.now() });
@@ -109,14 +122,8 @@ describe('POST /api/station/scan', () => {
   it('answers a scan in one statement: the station, its machine and the member together', async () => {
     const { device, member } = await arrange();
     await device.get('/api/station/state');
-    const statements: string[] = [];
-    const listen = (query: { sql: string }) => statements.push(query.sql);
-    ctx.db.on('query', listen);
-    try {
-      expect((await device.post('/api/station/scan', { badge: member.badge })).body.cleared).toBe(true);
-    } finally {
-      ctx.db.off('query', listen);
-    }
+    const { statements, answer } = await scanCountingStatements(device, member.badge);
+    expect(answer.cleared).toBe(true);
     expect(statements).toHaveLength(1);
     expect(statements[0]).toContain('device_token_hash');
   });
@@ -213,6 +220,82 @@ describe('POST /api/station/scan', () => {
     const { device, teacher } = await arrange();
     const res = await device.post('/api/station/scan', { badge: teacher.badge });
     expect(res.body.canSupervise).toBe(true);
+  });
+
+  describe('opening hours (rule 7)', () => {
+    const DAY = 24 * HOUR;
+    // This database's shop keeps UTC (set-up's plain shop record), so its calendar is UTC's.
+    const utcDate = (offsetDays: number) => new Date(Date.now() + offsetDays * DAY).toISOString().slice(0, 10);
+    // ISO 8601 weekday numbering: Monday 1 … Sunday 7.
+    const isoWeekday = (offsetDays: number) => ((new Date(Date.now() + offsetDays * DAY).getUTCDay() + 6) % 7) + 1;
+    const weekdayName = (offsetDays: number) => new Intl.DateTimeFormat('en-GB', { weekday: 'long', timeZone: 'UTC' }).format(Date.now() + offsetDays * DAY);
+
+    /** Hours are shop-wide and the other tests here expect the shop open: they go after each test. */
+    async function withHours(rows: { weekday: number; opens_at: string; closes_at: string }[], closures: object[], test: () => Promise<void>) {
+      await ctx.db('shop_hours').insert(rows);
+      if (closures.length > 0) await ctx.db('shop_closures').insert(closures);
+      try {
+        await test();
+      } finally {
+        await ctx.db('shop_closures').delete();
+        await ctx.db('shop_hours').delete();
+      }
+    }
+
+    it('outside the hours a member is refused with shop_closed and told the next opening; an instructor is not held by rule 7', async () => {
+      const { device, member, training, teacher } = await arrange();
+      const instructor = await badgeHolder(ctx, 'instructor', { firstName: 'Tobias' });
+      await waiverOnFile(instructor);
+      await createSignOff(ctx.db, { member_id: instructor.member.id, training_id: training.id, signed_by: teacher.member.id });
+
+      // Open only tomorrow, 10:00–12:00: closed for the whole of today.
+      await withHours([{ weekday: isoWeekday(1), opens_at: '10:00', closes_at: '12:00' }], [], async () => {
+        const refused = stationScanResultSchema.parse((await device.post('/api/station/scan', { badge: member.badge })).body);
+        expect(refused.cleared).toBe(false);
+        expect(refused.reasons).toEqual([
+          { code: 'shop_closed', rule: 7, message: 'The shop is closed now.', nextStep: `Come back when the shop opens, ${weekdayName(1)} 10:00.` },
+        ]);
+        expect(refused.rungs[0]).toMatchObject({ rule: 7, passed: false });
+        const start = await device.post('/api/station/sessions', { badge: member.badge, checklist: ALL_ITEMS });
+        expect(start.status).toBe(409);
+        expect(start.body.reasons.map((r: { code: string }) => r.code)).toEqual(['shop_closed']);
+
+        const supervisor = stationScanResultSchema.parse((await device.post('/api/station/scan', { badge: instructor.badge })).body);
+        expect(supervisor.cleared).toBe(true);
+        expect(supervisor.rungs.find((rung) => rung.rule === 7)).toMatchObject({ passed: true, reasons: [] });
+      });
+
+      expect((await device.post('/api/station/scan', { badge: member.badge })).body.cleared).toBe(true);
+    });
+
+    it('a closure covering today refuses a member with its reason, though the weekly hours say open', async () => {
+      const { device, member } = await arrange();
+      const allDay = [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({ weekday, opens_at: '00:00', closes_at: '24:00' }));
+
+      await withHours(allDay, [{ starts_on: utcDate(-1), ends_on: utcDate(0), reason: 'Winter deep clean' }], async () => {
+        const res = stationScanResultSchema.parse((await device.post('/api/station/scan', { badge: member.badge })).body);
+        expect(res.reasons).toEqual([
+          {
+            code: 'shop_closed',
+            rule: 7,
+            message: 'The shop is closed today: Winter deep clean.',
+            // Open around the clock again from tomorrow's midnight.
+            nextStep: `Come back when the shop opens, ${weekdayName(1)} 0:00.`,
+          },
+        ]);
+      });
+    });
+
+    it('inside the hours a member is cleared, and the scan is still one statement', async () => {
+      const { device, member } = await arrange();
+
+      await withHours([{ weekday: isoWeekday(0), opens_at: '00:00', closes_at: '24:00' }], [{ starts_on: utcDate(3), ends_on: utcDate(4), reason: 'Stocktaking' }], async () => {
+        const { statements, answer } = await scanCountingStatements(device, member.badge);
+        expect(answer.cleared).toBe(true);
+        expect(statements).toHaveLength(1);
+        expect(statements[0]).toContain('shop_hours');
+      });
+    });
   });
 
   it('another member scanning while a session runs is told who is on the machine', async () => {

@@ -1,12 +1,10 @@
 import { auditActions } from '@chuckkey/core';
 import { Link } from 'react-router-dom';
-import { Button, buttonClasses } from '../../../components/ui/button';
+import { buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { DownloadIcon } from '../../../components/ui/icons';
-import { Pagination } from '../../../components/ui/pagination';
-import { QueryError } from '../../../components/ui/query-error';
+import { PagedResults } from '../../../components/ui/paged-results';
 import { SelectField } from '../../../components/ui/select-field';
-import { Spinner } from '../../../components/ui/spinner';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format';
@@ -43,27 +41,21 @@ export function AuditLogView({ timeZone }: { timeZone: string | undefined }) {
         </a>
       </div>
 
-      {log.isPending ? (
-        <Spinner label="Loading the audit log…" />
-      ) : log.isError ? (
-        <QueryError error={log.error} what="the audit log" onRetry={() => void log.refetch()} retrying={log.isFetching} />
-      ) : log.data.items.length === 0 ? (
-        filters.page > 1 ? (
-          <EmptyState
-            title="This page is empty"
-            action={
-              <Button variant="secondary" onClick={() => update({ page: 1 })}>
-                Go to the first page
-              </Button>
-            }
-          />
-        ) : (
+      <PagedResults
+        query={log}
+        loadingLabel="Loading the audit log…"
+        what="the audit log"
+        page={filters.page}
+        pageSize={AUDIT_PAGE_SIZE}
+        nouns={['entry', 'entries']}
+        onPageChange={(page) => update({ page })}
+        empty={
           <EmptyState title={filters.action ? `Nothing recorded for “${auditActionLabels[filters.action]}”` : 'Nothing recorded yet'}>
             Sign-offs, revocations, role changes, badges, waivers and stations are recorded here as they happen.
           </EmptyState>
-        )
-      ) : (
-        <div className={log.isPlaceholderData ? 'opacity-60 transition-opacity' : undefined} aria-busy={log.isPlaceholderData}>
+        }
+      >
+        {(entries) => (
           <Table caption="Audit log, newest first">
             <THead>
               <Tr>
@@ -75,7 +67,7 @@ export function AuditLogView({ timeZone }: { timeZone: string | undefined }) {
               </Tr>
             </THead>
             <TBody>
-              {log.data.items.map((entry) => (
+              {entries.map((entry) => (
                 <Tr key={entry.id} className="align-top">
                   <Td className="whitespace-nowrap">
                     <time dateTime={entry.at}>{formatDateTime(entry.at, timeZone)}</time>
@@ -106,18 +98,8 @@ export function AuditLogView({ timeZone }: { timeZone: string | undefined }) {
               ))}
             </TBody>
           </Table>
-        </div>
-      )}
-
-      {log.data && log.data.total > 0 && (
-        <Pagination
-          page={filters.page}
-          pageSize={AUDIT_PAGE_SIZE}
-          total={log.data.total}
-          nouns={['entry', 'entries']}
-          onPageChange={(page) => update({ page })}
-        />
-      )}
+        )}
+      </PagedResults>
     </div>
   );
 }

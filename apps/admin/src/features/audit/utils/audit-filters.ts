@@ -21,6 +21,9 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'station.created': 'Station added',
   'station.paired': 'Station paired',
   'station.revoked': 'Station revoked',
+  'shop.hours_changed': 'Opening hours changed',
+  'shop.closure_added': 'Closure added',
+  'shop.closure_removed': 'Closure removed',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {

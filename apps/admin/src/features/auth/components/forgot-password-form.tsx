@@ -1,11 +1,10 @@
 import { passwordResetRequestSchema } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { EmailField } from '../../../components/ui/email-field';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
 const messages = {
@@ -14,20 +13,20 @@ const messages = {
 
 export function ForgotPasswordForm() {
   const requestReset = useRequestPasswordReset();
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
     setError,
     formState: { errors },
   } = useForm({ resolver: zodResolver(passwordResetRequestSchema), defaultValues: { email: '' } });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['email'], { messages });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     try {
       await requestReset.mutateAsync(values);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['email'], { messages }));
+      showServerError(error);
     }
   });
 
@@ -43,14 +42,9 @@ export function ForgotPasswordForm() {
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
       {formError && <Alert tone="error">{formError}</Alert>}
-      <TextField
-        label="E-mail"
+      <EmailField
         hint="The address you sign in with. We send a link to set a new password."
-        type="email"
         autoComplete="username"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
         error={errors.email?.message}
         {...register('email')}
       />

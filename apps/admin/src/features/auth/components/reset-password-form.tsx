@@ -7,22 +7,15 @@ import { Alert } from '../../../components/ui/alert';
 import { Button, ButtonLink } from '../../../components/ui/button';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { ApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
-import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
+import { passwordPairSchema } from '../../../lib/password-confirmation';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 
-const formSchema = passwordResetConfirmSchema
-  .pick({ password: true })
-  .extend({ confirmPassword: confirmPasswordSchema })
-  .refine((values) => values.password === values.confirmPassword, {
-    path: ['confirmPassword'],
-    error: passwordsDifferMessage,
-  });
+const formSchema = passwordPairSchema(passwordResetConfirmSchema.shape.password);
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const confirmReset = useConfirmPasswordReset();
-  const [formError, setFormError] = useState<string | null>(null);
   const [linkExpired, setLinkExpired] = useState(false);
   const {
     register,
@@ -30,6 +23,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     setError,
     formState: { errors },
   } = useForm({ resolver: zodResolver(formSchema), defaultValues: { password: '', confirmPassword: '' } });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['password']);
 
   const onSubmit = handleSubmit(async ({ password }) => {
     setFormError(null);
@@ -40,7 +34,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
         setLinkExpired(true);
         return;
       }
-      setFormError(applyServerErrors(error, setError, ['password']));
+      showServerError(error);
     }
   });
 

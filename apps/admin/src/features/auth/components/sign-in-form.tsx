@@ -1,11 +1,11 @@
 import { loginSchema } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
+import { EmailField } from '../../../components/ui/email-field';
 import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useSignIn } from '../api/sign-in';
 
 const messages = {
@@ -16,7 +16,6 @@ const messages = {
 /** On success the signed-in person's query is filled; the page decides where to go next. */
 export function SignInForm() {
   const signIn = useSignIn();
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
@@ -24,6 +23,7 @@ export function SignInForm() {
     resetField,
     formState: { errors },
   } = useForm({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '' } });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['email', 'password'], { messages });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -31,23 +31,14 @@ export function SignInForm() {
       await signIn.mutateAsync(values);
     } catch (error) {
       resetField('password');
-      setFormError(applyServerErrors(error, setError, ['email', 'password'], { messages }));
+      showServerError(error);
     }
   });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
       {formError && <Alert tone="error">{formError}</Alert>}
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="username"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
-        error={errors.email?.message}
-        {...register('email')}
-      />
+      <EmailField autoComplete="username" error={errors.email?.message} {...register('email')} />
       <TextField
         label="Password"
         type="password"

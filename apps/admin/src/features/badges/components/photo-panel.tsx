@@ -8,7 +8,7 @@ import { FileField, UploadProgress } from '../../../components/upload-field';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { formatMegabytes, readAsDataUrl, refusedUploadMessage, uploadFileSchema } from '../../../lib/upload-file';
 import { useUploadPhoto } from '../api/upload-photo';
 
@@ -28,7 +28,6 @@ export function PhotoPanel({ memberId, name }: { memberId: string; name: string 
   const upload = useUploadPhoto();
   const [preview, setPreview] = useState<string | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
-  const [formError, setFormError] = useState<string | null>(null);
   const [version, setVersion] = useState(0);
   const [saved, setSaved] = useState(false);
   const {
@@ -38,6 +37,7 @@ export function PhotoPanel({ memberId, name }: { memberId: string; name: string 
     reset,
     formState: { errors },
   } = useForm<z.input<typeof formSchema>, unknown, z.output<typeof formSchema>>({ resolver: zodResolver(formSchema) });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['photo']);
 
   const hint = `JPEG or PNG, at most ${limit}. Your face, clearly, like a passport photo: it is printed on your badge card so that instructors know who you are.`;
 
@@ -54,7 +54,7 @@ export function PhotoPanel({ memberId, name }: { memberId: string; name: string 
     } catch (error) {
       const refused = refusedUploadMessage(error, rules);
       if (refused) setError('photo', { type: 'server', message: refused }, { shouldFocus: true });
-      else setFormError(applyServerErrors(error, setError, ['photo']));
+      else showServerError(error);
     } finally {
       setProgress(null);
     }

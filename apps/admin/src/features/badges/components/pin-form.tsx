@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useSetPin } from '../api/set-pin';
 
 // The second copy exists only in the browser, to catch a slip of the thumb.
@@ -19,7 +19,6 @@ const emptyForm = { pin: '', confirmPin: '' };
 
 export function PinForm() {
   const setPin = useSetPin();
-  const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const {
     register,
@@ -28,6 +27,7 @@ export function PinForm() {
     reset,
     formState: { errors },
   } = useForm({ resolver: zodResolver(formSchema), defaultValues: emptyForm });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['pin']);
 
   const onSubmit = handleSubmit(async ({ pin }) => {
     setFormError(null);
@@ -37,7 +37,7 @@ export function PinForm() {
       reset(emptyForm);
       setSaved(true);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['pin']));
+      showServerError(error);
     }
   });
 

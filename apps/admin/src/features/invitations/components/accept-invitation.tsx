@@ -7,19 +7,13 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { ApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
-import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
+import { passwordPairSchema } from '../../../lib/password-confirmation';
 import { useAcceptInvitation } from '../api/accept-invitation';
 import { useInvitationPreview } from '../api/get-invitation-preview';
 
-const formSchema = invitationAcceptSchema
-  .pick({ password: true })
-  .extend({ confirmPassword: confirmPasswordSchema })
-  .refine((values) => values.password === values.confirmPassword, {
-    path: ['confirmPassword'],
-    error: passwordsDifferMessage,
-  });
+const formSchema = passwordPairSchema(invitationAcceptSchema.shape.password);
 
 export function InvitationUnusable() {
   return (
@@ -38,7 +32,6 @@ interface AcceptFormProps {
 
 function AcceptForm({ token, preview, onAccepted }: AcceptFormProps) {
   const accept = useAcceptInvitation();
-  const [formError, setFormError] = useState<string | null>(null);
   const [unusable, setUnusable] = useState(false);
   const {
     register,
@@ -46,6 +39,7 @@ function AcceptForm({ token, preview, onAccepted }: AcceptFormProps) {
     setError,
     formState: { errors },
   } = useForm({ resolver: zodResolver(formSchema), defaultValues: { password: '', confirmPassword: '' } });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['password']);
 
   const onSubmit = handleSubmit(async ({ password }) => {
     setFormError(null);
@@ -56,7 +50,7 @@ function AcceptForm({ token, preview, onAccepted }: AcceptFormProps) {
         setUnusable(true);
         return;
       }
-      setFormError(applyServerErrors(error, setError, ['password']));
+      showServerError(error);
     }
   });
 

@@ -4,10 +4,11 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
+import { EmailField } from '../../../components/ui/email-field';
 import { Panel } from '../../../components/ui/panel';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useCreateInvitation } from '../api/create-invitation';
 
 const emptyForm: InvitationCreateInput = { firstName: '', lastName: '', email: '', role: 'member' };
@@ -19,7 +20,6 @@ const errorOptions = {
 
 export function InviteForm() {
   const createInvitation = useCreateInvitation();
-  const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const {
     register,
@@ -31,6 +31,7 @@ export function InviteForm() {
     resolver: zodResolver(invitationCreateSchema),
     defaultValues: emptyForm,
   });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['firstName', 'lastName', 'email', 'role'], errorOptions);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -40,7 +41,7 @@ export function InviteForm() {
       reset(emptyForm);
       setSentTo(invitation.email);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['firstName', 'lastName', 'email', 'role'], errorOptions));
+      showServerError(error);
     }
   });
 
@@ -60,16 +61,7 @@ export function InviteForm() {
           <TextField label="First name" autoComplete="off" error={errors.firstName?.message} {...register('firstName')} />
           <TextField label="Last name" autoComplete="off" error={errors.lastName?.message} {...register('lastName')} />
         </div>
-        <TextField
-          label="E-mail"
-          type="email"
-          autoComplete="off"
-          inputMode="email"
-          autoCapitalize="none"
-          spellCheck={false}
-          error={errors.email?.message}
-          {...register('email')}
-        />
+        <EmailField autoComplete="off" error={errors.email?.message} {...register('email')} />
         <SelectField label="Role" error={errors.role?.message} {...register('role')}>
           {roles.map((role) => (
             <option key={role} value={role}>

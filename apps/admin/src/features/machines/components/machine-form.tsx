@@ -1,18 +1,18 @@
 import { machineCategories, machineCategoryLabels, machineInputSchema, type Area, type MachineDetail, type Training } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
-import { ChecklistEditor } from '../../../components/checklist-editor';
+import { ChecklistEditor, checklistErrorProps } from '../../../components/checklist-editor';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
 import { ChoiceGroup } from '../../../components/ui/choice-group';
+import { FormActions } from '../../../components/ui/form-actions';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { checklistDraftSchema, newDraftKey, toDraft, withChecklistIds } from '../../../lib/checklist';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateMachine } from '../api/create-machine';
 import { useUpdateMachine } from '../api/update-machine';
 import { usualSafetyItems } from '../utils/usual-safety-items';
@@ -34,7 +34,6 @@ interface MachineFormProps {
 export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: MachineFormProps) {
   const create = useCreateMachine();
   const update = useUpdateMachine();
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     control,
@@ -56,6 +55,7 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
       trainingIds: machine?.trainings.map((training) => training.id) ?? [],
     },
   });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, fields);
   const category = useWatch({ control, name: 'category' });
   const checklist = useWatch({ control, name: 'safetyChecklist' }) ?? [];
   // Offered for an empty list only: next to items of the shop's own wording they would read as repeats.
@@ -68,11 +68,10 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
       const saved = machine ? await update.mutateAsync({ id: machine.id, machine: input }) : await create.mutateAsync(input);
       onSaved(saved);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, fields));
+      showServerError(error);
     }
   });
 
-  const checklistErrors = errors.safetyChecklist;
   return (
     <form noValidate onSubmit={onSubmit} className="flex max-w-2xl flex-col gap-5">
       {formError && <Alert tone="error">{formError}</Alert>}
@@ -154,8 +153,7 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
             hint="What a member confirms at the station before each session: protective equipment and set-up. It reminds; it does not replace in-person training, the shop's rules or local codes."
             items={field.value ?? []}
             onChange={field.onChange}
-            error={checklistErrors?.message ?? checklistErrors?.root?.message}
-            itemErrors={Array.isArray(checklistErrors) ? checklistErrors.map((item) => item?.label?.message) : []}
+            {...checklistErrorProps(errors.safetyChecklist)}
             addLabel="Add a safety item"
           />
         )}
@@ -181,14 +179,11 @@ export function MachineForm({ machine, areas, trainings, onSaved, onCancel }: Ma
         </div>
       )}
 
-      <div className="flex flex-col-reverse gap-2 sm:flex-row">
-        <Button type="submit" pending={create.isPending || update.isPending}>
-          {machine ? 'Save machine' : 'Create machine'}
-        </Button>
-        <Button variant="secondary" onClick={onCancel}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions
+        submitLabel={machine ? 'Save machine' : 'Create machine'}
+        pending={create.isPending || update.isPending}
+        onCancel={onCancel}
+      />
     </form>
   );
 }

@@ -1,13 +1,11 @@
 import { roleLabels, roleSchema, roles } from '@chuckkey/core';
 import { useCallback, useState } from 'react';
 import { WIDE_SCREEN, useMediaQuery } from '../../../hooks/use-media-query';
-import { Button, buttonClasses } from '../../../components/ui/button';
+import { buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { DownloadIcon } from '../../../components/ui/icons';
-import { Pagination } from '../../../components/ui/pagination';
-import { QueryError } from '../../../components/ui/query-error';
+import { PagedResults } from '../../../components/ui/paged-results';
 import { SelectField } from '../../../components/ui/select-field';
-import { Spinner } from '../../../components/ui/spinner';
 import { useMembers } from '../api/get-members';
 import { useMemberFilters } from '../hooks/use-member-filters';
 import { memberSortChoices, membersCsvHref, nextSort, readSortChoice, sortChoiceValue } from '../utils/member-filters';
@@ -77,34 +75,29 @@ export function MembersPanel({ currentUserId, timeZone, extras = {} }: MembersPa
         </a>
       </div>
 
-      {members.isPending ? (
-        <Spinner label="Loading members…" />
-      ) : members.isError ? (
-        <QueryError error={members.error} what="the members" onRetry={() => void members.refetch()} retrying={members.isFetching} />
-      ) : members.data.items.length === 0 ? (
-        filters.page > 1 ? (
-          <EmptyState
-            title="This page is empty"
-            action={
-              <Button variant="secondary" onClick={() => update({ page: 1 })}>
-                Go to the first page
-              </Button>
-            }
-          >
-            The list is shorter than it was when this page was opened.
-          </EmptyState>
-        ) : filtered ? (
-          <EmptyState title="Nobody matches">
-            Try a shorter search, or choose &ldquo;All roles&rdquo;.
-          </EmptyState>
-        ) : (
-          <EmptyState title="No members yet">Invite the first person with the form below.</EmptyState>
-        )
-      ) : (
-        <div className={members.isPlaceholderData ? 'opacity-60 transition-opacity' : undefined} aria-busy={members.isPlaceholderData}>
-          {wide ? (
+      <PagedResults
+        query={members}
+        loadingLabel="Loading members…"
+        what="the members"
+        page={filters.page}
+        pageSize={filters.pageSize}
+        nouns={['member', 'members']}
+        onPageChange={(page) => update({ page })}
+        pastEndNote="The list is shorter than it was when this page was opened."
+        empty={
+          filtered ? (
+            <EmptyState title="Nobody matches">
+              Try a shorter search, or choose &ldquo;All roles&rdquo;.
+            </EmptyState>
+          ) : (
+            <EmptyState title="No members yet">Invite the first person with the form below.</EmptyState>
+          )
+        }
+      >
+        {(items) =>
+          wide ? (
             <MembersTable
-              members={members.data.items}
+              members={items}
               filters={filters}
               currentUserId={currentUserId}
               timeZone={timeZone}
@@ -114,25 +107,15 @@ export function MembersPanel({ currentUserId, timeZone, extras = {} }: MembersPa
             />
           ) : (
             <MemberCards
-              members={members.data.items}
+              members={items}
               currentUserId={currentUserId}
               timeZone={timeZone}
               onChange={setChange}
               extras={extras}
             />
-          )}
-        </div>
-      )}
-
-      {members.data && members.data.total > 0 && (
-        <Pagination
-          page={filters.page}
-          pageSize={filters.pageSize}
-          total={members.data.total}
-          nouns={['member', 'members']}
-          onPageChange={(page) => update({ page })}
-        />
-      )}
+          )
+        }
+      </PagedResults>
 
       <MemberChangeDialog change={change} onClose={() => setChange(null)} />
     </section>

@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { confirmPasswordSchema, passwordsDifferMessage } from '../../../lib/password-confirmation';
 import { useChangePassword } from '../api/change-password';
 
@@ -27,7 +27,6 @@ const errorOptions = {
 
 export function PasswordForm() {
   const changePassword = useChangePassword();
-  const [formError, setFormError] = useState<string | null>(null);
   const [changed, setChanged] = useState(false);
   const {
     register,
@@ -36,6 +35,7 @@ export function PasswordForm() {
     reset,
     formState: { errors },
   } = useForm({ resolver: zodResolver(formSchema), defaultValues: emptyForm });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['currentPassword', 'newPassword'], errorOptions);
 
   const onSubmit = handleSubmit(async ({ currentPassword, newPassword }) => {
     setFormError(null);
@@ -45,7 +45,7 @@ export function PasswordForm() {
       reset(emptyForm);
       setChanged(true);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['currentPassword', 'newPassword'], errorOptions));
+      showServerError(error);
     }
   });
 

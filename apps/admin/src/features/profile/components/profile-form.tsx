@@ -7,8 +7,9 @@ import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
+import { EmailField } from '../../../components/ui/email-field';
 import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useProfile } from '../api/get-profile';
 import { useUpdateProfile } from '../api/update-profile';
 
@@ -24,7 +25,6 @@ interface ProfileFormProps {
 
 function ProfileFields({ profile, onSaved }: ProfileFormProps & { profile: Profile }) {
   const update = useUpdateProfile();
-  const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const {
     register,
@@ -36,6 +36,7 @@ function ProfileFields({ profile, onSaved }: ProfileFormProps & { profile: Profi
     resolver: zodResolver(profileUpdateSchema),
     defaultValues: { firstName: profile.firstName, lastName: profile.lastName, email: profile.email },
   });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['firstName', 'lastName', 'email'], errorOptions);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -46,7 +47,7 @@ function ProfileFields({ profile, onSaved }: ProfileFormProps & { profile: Profi
       setSaved(true);
       onSaved?.(next);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['firstName', 'lastName', 'email'], errorOptions));
+      showServerError(error);
     }
   });
 
@@ -58,14 +59,9 @@ function ProfileFields({ profile, onSaved }: ProfileFormProps & { profile: Profi
         <TextField label="First name" autoComplete="given-name" error={errors.firstName?.message} {...register('firstName')} />
         <TextField label="Last name" autoComplete="family-name" error={errors.lastName?.message} {...register('lastName')} />
       </div>
-      <TextField
-        label="E-mail"
+      <EmailField
         hint="You sign in with it, and the shop's mail goes to it."
-        type="email"
         autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
         error={errors.email?.message}
         {...register('email')}
       />

@@ -2,4 +2,5 @@ export const shopKeys = {
   all: ['shop'] as const,
   detail: () => [...shopKeys.all, 'detail'] as const,
   areas: () => [...shopKeys.all, 'areas'] as const,
+  hours: () => [...shopKeys.all, 'hours'] as const,
 };

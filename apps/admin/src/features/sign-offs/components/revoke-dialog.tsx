@@ -1,12 +1,12 @@
 import { signOffRevokeSchema, type SignOff } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
+import { DialogActions } from '../../../components/ui/form-actions';
 import { TextAreaField } from '../../../components/ui/text-area-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useRevokeSignOff } from '../api/revoke-sign-off';
 
 const errorOptions = {
@@ -17,20 +17,20 @@ const errorOptions = {
 
 function RevokeForm({ signOff, onClose, onRevoked }: { signOff: SignOff; onClose: () => void; onRevoked: (signOff: SignOff) => void }) {
   const revoke = useRevokeSignOff();
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
     setError,
     formState: { errors },
   } = useForm({ resolver: zodResolver(signOffRevokeSchema), defaultValues: { reason: '' } });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['reason'], errorOptions);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     try {
       onRevoked(await revoke.mutateAsync({ id: signOff.id, revoke: values }));
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['reason'], errorOptions));
+      showServerError(error);
     }
   });
 
@@ -44,14 +44,11 @@ function RevokeForm({ signOff, onClose, onRevoked }: { signOff: SignOff; onClose
         error={errors.reason?.message}
         {...register('reason')}
       />
-      <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-        <Button variant="secondary" onClick={onClose} disabled={revoke.isPending}>
-          Cancel
-        </Button>
+      <DialogActions pending={revoke.isPending} onCancel={onClose}>
         <Button type="submit" variant="danger" pending={revoke.isPending}>
           Revoke sign-off
         </Button>
-      </div>
+      </DialogActions>
     </form>
   );
 }

@@ -19,8 +19,8 @@ import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { ApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateSignOff } from '../api/create-sign-off';
 import { previewValidUntil, validUntilDate } from '../utils/sign-off-dates';
 import { CandidateSearch } from './candidate-search';
@@ -60,7 +60,6 @@ interface SignOffFormProps {
 export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormProps) {
   const create = useCreateSignOff();
   const [member, setMember] = useState<TeachMember | null>(null);
-  const [formError, setFormError] = useState<string | null>(null);
   const [done, setDone] = useState<SignOff | null>(null);
   const [now, setNow] = useState(() => new Date());
   const chosenRef = useRef<HTMLDivElement>(null);
@@ -77,6 +76,7 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
     reset,
     formState: { errors, isSubmitted },
   } = useForm<SignOffCreateInput, unknown, SignOffCreate>({ resolver: zodResolver(signOffCreateSchema), defaultValues: emptyForm });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, fields, errorOptions);
 
   const trainingId = useWatch({ control, name: 'trainingId' });
   const level = useWatch({ control, name: 'level' });
@@ -118,7 +118,7 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
         setError('checklist', { type: 'server', message: `Not ticked yet: ${missing.join('; ')}. Every item must be seen before signing off.` }, { shouldFocus: true });
         return;
       }
-      setFormError(applyServerErrors(error, setError, fields, errorOptions));
+      showServerError(error);
     }
   });
 

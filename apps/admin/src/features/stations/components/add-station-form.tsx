@@ -1,16 +1,16 @@
 import { stationCreateSchema, type Station, type StationCreate } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { ChoiceGroup, RadioOption } from '../../../components/ui/choice-group';
+import { DialogActions } from '../../../components/ui/form-actions';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { machineChoices } from '../utils/machine-choices';
 
 type FormInput = z.input<typeof stationCreateSchema>;
@@ -42,7 +42,6 @@ interface AddStationFormProps {
 }
 
 export function AddStationForm({ machines, stations, pending, onCreate, onCancel }: AddStationFormProps) {
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     control,
@@ -53,6 +52,7 @@ export function AddStationForm({ machines, stations, pending, onCreate, onCancel
     resolver: zodResolver(stationCreateSchema),
     defaultValues: { kind: 'machine', machineId: undefined, name: '' },
   });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, fields, errorOptions);
   const kind = useWatch({ control, name: 'kind' }) ?? 'machine';
   const choices = machineChoices(machines, stations);
 
@@ -64,7 +64,7 @@ export function AddStationForm({ machines, stations, pending, onCreate, onCancel
     try {
       await onCreate(input);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, fields, errorOptions));
+      showServerError(error);
     }
   });
 
@@ -102,14 +102,11 @@ export function AddStationForm({ machines, stations, pending, onCreate, onCancel
         <TextField label="Name (optional)" hint={nameHints[kind]} autoComplete="off" error={errors.name?.message} {...register('name')} />
       )}
 
-      <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-        <Button variant="secondary" onClick={onCancel} disabled={pending}>
-          Cancel
-        </Button>
+      <DialogActions pending={pending} onCancel={onCancel}>
         <Button type="submit" pending={pending} disabled={kind === 'machine' && choices.length === 0}>
           Add station
         </Button>
-      </div>
+      </DialogActions>
     </form>
   );
 }

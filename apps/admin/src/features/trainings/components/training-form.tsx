@@ -1,16 +1,15 @@
 import { trainingInputSchema, type Training } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { ChecklistEditor } from '../../../components/checklist-editor';
+import { ChecklistEditor, checklistErrorProps } from '../../../components/checklist-editor';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
+import { FormActions } from '../../../components/ui/form-actions';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { checklistDraftSchema, toDraft, withChecklistIds } from '../../../lib/checklist';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateTraining } from '../api/create-training';
 import { useUpdateTraining } from '../api/update-training';
 
@@ -31,7 +30,6 @@ interface TrainingFormProps {
 export function TrainingForm({ training, onSaved, onCancel }: TrainingFormProps) {
   const create = useCreateTraining();
   const update = useUpdateTraining();
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     control,
@@ -48,6 +46,7 @@ export function TrainingForm({ training, onSaved, onCancel }: TrainingFormProps)
       active: training?.active ?? true,
     },
   });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['name', 'description', 'checklist', 'validityMonths']);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -56,11 +55,10 @@ export function TrainingForm({ training, onSaved, onCancel }: TrainingFormProps)
       const saved = training ? await update.mutateAsync({ id: training.id, training: input }) : await create.mutateAsync(input);
       onSaved(saved);
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['name', 'description', 'checklist', 'validityMonths']));
+      showServerError(error);
     }
   });
 
-  const checklistErrors = errors.checklist;
   return (
     <form noValidate onSubmit={onSubmit} className="flex max-w-2xl flex-col gap-5">
       {formError && <Alert tone="error">{formError}</Alert>}
@@ -80,8 +78,7 @@ export function TrainingForm({ training, onSaved, onCancel }: TrainingFormProps)
             hint="What the instructor must see the member do before signing them off. The instructor ticks every item."
             items={field.value}
             onChange={field.onChange}
-            error={checklistErrors?.message ?? checklistErrors?.root?.message}
-            itemErrors={Array.isArray(checklistErrors) ? checklistErrors.map((item) => item?.label?.message) : []}
+            {...checklistErrorProps(errors.checklist)}
             addLabel="Add a checklist item"
           />
         )}
@@ -103,14 +100,11 @@ export function TrainingForm({ training, onSaved, onCancel }: TrainingFormProps)
         hint="Instructors can sign off only active trainings. Sign-offs already given keep counting."
         {...register('active')}
       />
-      <div className="flex flex-col-reverse gap-2 sm:flex-row">
-        <Button type="submit" pending={create.isPending || update.isPending}>
-          {training ? 'Save training' : 'Create training'}
-        </Button>
-        <Button variant="secondary" onClick={onCancel}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions
+        submitLabel={training ? 'Save training' : 'Create training'}
+        pending={create.isPending || update.isPending}
+        onCancel={onCancel}
+      />
     </form>
   );
 }

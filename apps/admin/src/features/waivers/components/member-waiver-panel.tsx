@@ -6,17 +6,17 @@ import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { FileField, UploadProgress } from '../../../components/upload-field';
 import { Button } from '../../../components/ui/button';
-import { CheckIcon, WarningIcon } from '../../../components/ui/icons';
+import { WarningIcon } from '../../../components/ui/icons';
 import { Panel } from '../../../components/ui/panel';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { formatMegabytes, refusedUploadMessage, uploadFileSchema } from '../../../lib/upload-file';
 import { useMemberWaiver } from '../api/get-member-waiver';
 import { useUploadWaiverScan, waiverScanHref } from '../api/upload-waiver-scan';
-import { WaiverRecordText } from './waiver-status-line';
+import { WaiverOnFile } from './waiver-status-line';
 
 const limit = formatMegabytes(WAIVER_SCAN_MAX_BYTES);
 
@@ -33,13 +33,13 @@ const formSchema = z.object({ scan: uploadFileSchema(rules) });
 function ScanForm({ memberId, version }: { memberId: string; version: number }) {
   const upload = useUploadWaiverScan();
   const [progress, setProgress] = useState<number | null>(null);
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     control,
     handleSubmit,
     setError,
     formState: { errors },
   } = useForm<z.input<typeof formSchema>, unknown, z.output<typeof formSchema>>({ resolver: zodResolver(formSchema) });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['scan']);
   const hint = `PDF, JPEG or PNG of the paper copy this member signed for version ${version}, at most ${limit}.`;
 
   const onSubmit = handleSubmit(async ({ scan }) => {
@@ -50,7 +50,7 @@ function ScanForm({ memberId, version }: { memberId: string; version: number }) 
     } catch (error) {
       const refused = refusedUploadMessage(error, rules);
       if (refused) setError('scan', { type: 'server', message: refused }, { shouldFocus: true });
-      else setFormError(applyServerErrors(error, setError, ['scan']));
+      else showServerError(error);
     } finally {
       setProgress(null);
     }
@@ -102,12 +102,7 @@ export function MemberWaiverPanel({ memberId, timeZone }: { memberId: string; ti
       ) : (
         <div className="flex flex-col gap-4">
           {status.data.onFile && status.data.record ? (
-            <p className="flex items-start gap-2 text-neutral-900">
-              <CheckIcon className="mt-0.5 size-5 shrink-0 text-success" />
-              <span>
-                <strong>On file.</strong> <WaiverRecordText record={status.data.record} timeZone={timeZone} />
-              </span>
-            </p>
+            <WaiverOnFile record={status.data.record} timeZone={timeZone} />
           ) : (
             <p className="flex items-start gap-2 text-neutral-900">
               <WarningIcon className="mt-0.5 size-5 shrink-0 text-warning" />

@@ -1,22 +1,21 @@
 import { waiverAcceptSchema, type WaiverVersion } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { CheckIcon, WarningIcon } from '../../../components/ui/icons';
+import { WarningIcon } from '../../../components/ui/icons';
 import { Panel } from '../../../components/ui/panel';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
 import { TextField } from '../../../components/ui/text-field';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { ApiError } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { useAcceptWaiver } from '../api/accept-waiver';
 import { useMemberWaiver } from '../api/get-member-waiver';
-import { WaiverRecordText } from './waiver-status-line';
+import { WaiverOnFile } from './waiver-status-line';
 
 interface AcceptFormProps {
   waiver: WaiverVersion;
@@ -25,7 +24,6 @@ interface AcceptFormProps {
 
 function AcceptForm({ waiver, name }: AcceptFormProps) {
   const accept = useAcceptWaiver();
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
@@ -43,6 +41,7 @@ function AcceptForm({ waiver, name }: AcceptFormProps) {
       outdated_version: 'The shop published a new version while you were reading. Read the new text, then accept again.',
     },
   };
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['typedName'], errorOptions);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -53,7 +52,7 @@ function AcceptForm({ waiver, name }: AcceptFormProps) {
         setFormError(errorOptions.messages.outdated_version);
         return;
       }
-      setFormError(applyServerErrors(error, setError, ['typedName'], errorOptions));
+      showServerError(error);
     }
   });
 
@@ -98,12 +97,7 @@ export function WaiverPanel({ memberId, name, timeZone }: WaiverPanelProps) {
             When the shop publishes its safety waiver, it appears here for you to read and accept.
           </EmptyState>
         ) : status.data.onFile && status.data.record ? (
-          <p className="flex items-start gap-2 text-neutral-900">
-            <CheckIcon className="mt-0.5 size-5 shrink-0 text-success" />
-            <span>
-              <strong>On file.</strong> <WaiverRecordText record={status.data.record} timeZone={timeZone} />
-            </span>
-          </p>
+          <WaiverOnFile record={status.data.record} timeZone={timeZone} />
         ) : (
           <>
             <p className="flex items-start gap-2 text-neutral-900">

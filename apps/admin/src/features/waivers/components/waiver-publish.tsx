@@ -10,8 +10,8 @@ import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
+import { useServerErrors } from '../../../hooks/use-server-errors';
 import { formatDate } from '../../../lib/format';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { useCurrentWaiver } from '../api/get-current-waiver';
 import { usePublishWaiver } from '../api/publish-waiver';
 
@@ -20,7 +20,6 @@ export function WaiverPublisher({ timeZone }: { timeZone: string | undefined }) 
   const publish = usePublishWaiver();
   const [pending, setPending] = useState<WaiverPublish | null>(null);
   const [published, setPublished] = useState<number | null>(null);
-  const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
@@ -28,6 +27,7 @@ export function WaiverPublisher({ timeZone }: { timeZone: string | undefined }) 
     reset,
     formState: { errors },
   } = useForm({ resolver: zodResolver(waiverPublishSchema), defaultValues: { title: '', body: '' } });
+  const { formError, setFormError, showServerError } = useServerErrors(setError, ['title', 'body']);
 
   const nextVersion = (current.data?.version ?? 0) + 1;
 
@@ -41,7 +41,7 @@ export function WaiverPublisher({ timeZone }: { timeZone: string | undefined }) 
       setPublished(version.version);
     } catch (error) {
       setPending(null);
-      setFormError(applyServerErrors(error, setError, ['title', 'body']));
+      showServerError(error);
     }
   }
 
