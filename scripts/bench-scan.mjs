@@ -1,16 +1,16 @@
 // pnpm bench:scan: scan-to-decision latency and throughput of POST /api/station/scan on a
 // throwaway database seeded to a busy shop's size, through the real server.
-import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import os from 'node:os';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { randomBytes } from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { done, fail, step } from './lib/log.mjs';
 import { freePort } from './lib/postgres.mjs';
+import { percentile, throwawayStack } from './lib/bench.mjs';
 import { leanConnection } from './lib/lean-http.mjs';
 import { run } from './lib/run.mjs';
-import { healthy, prepareDatabase, root, spawnService, startCluster, stopChild, waitFor } from './lib/stack.mjs';
+import { healthy, prepareDatabase, root, spawnService, waitFor } from './lib/stack.mjs';
 
 const RATE = 200;
 const OPEN_LOOP_SECONDS = 30;
@@ -18,14 +18,7 @@ const CONCURRENCY = 32;
 const SATURATION_SECONDS = 15;
 const WARM_UP = 500;
 
-let cluster;
-let home;
-let server;
-
-function percentile(sorted, p) {
-  if (!sorted.length) return NaN;
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
-}
+let stack;
 
 function summary(label, latencies, seconds, failures) {
   const sorted = Float64Array.from(latencies).sort();
@@ -37,28 +30,13 @@ function summary(label, latencies, seconds, failures) {
   );
 }
 
-async function cleanup() {
-  await stopChild(server);
-  if (cluster) {
-    try {
-      cluster.stop();
-    } catch (error) {
-      console.error(`could not stop the throwaway cluster: ${error.message}`);
-    }
-  }
-  if (home) rmSync(home, { recursive: true, force: true });
-}
-
 async function main() {
-  home = mkdtempSync(path.join(os.tmpdir(), 'chuckkey-bench-'));
-  chmodSync(home, 0o755);
-  const started = await startCluster({ home, port: await freePort(), throwaway: true, database: 'chuckkey_bench' });
-  cluster = started.cluster;
-  const databaseUrl = started.url;
+  stack = await throwawayStack();
+  const databaseUrl = stack.url;
   await prepareDatabase(databaseUrl, { seed: false });
 
   const badgeSecret = randomBytes(32).toString('hex');
-  const output = path.join(home, 'bench-seed.json');
+  const output = path.join(stack.home, 'bench-seed.json');
   step('Seeding 10,000 members, 100 machines and 1,000,000 past sessions');
   await run(path.join(root, 'db', 'node_modules', '.bin', 'tsx'), ['src/bench-seed.ts'], {
     cwd: path.join(root, 'db'),
@@ -70,7 +48,7 @@ async function main() {
 
   step('Starting the server (production mode)');
   const port = await freePort();
-  server = spawnService('server', ['src/main.ts'], {
+  const server = stack.track(spawnService('server', ['src/main.ts'], {
     NODE_ENV: 'production',
     LOG_LEVEL: 'warn',
     HOST: '127.0.0.1',
@@ -81,7 +59,7 @@ async function main() {
     SERVE_APPS: 'false',
     COOKIE_SECURE: 'false',
     STATION_SCAN_LIMIT_PER_MINUTE: '1000000',
-  });
+  }));
   const base = `http://127.0.0.1:${port}`;
   await waitFor(() => healthy(base), server, 'the server');
   done(`server on ${base}`);
@@ -176,4 +154,4 @@ async function main() {
 
 main()
   .catch((error) => fail(error))
-  .finally(cleanup);
+  .finally(() => stack?.stop());

@@ -12,8 +12,8 @@ export default defineConfig({
   plugins: [react(), tailwindcss()],
   server: {
     proxy: {
-      '/api': { target: serverOrigin, changeOrigin: false },
-      '/socket.io': { target: serverOrigin, ws: true, changeOrigin: false },
+      // The live link (socket.io at /api/live) is a WebSocket: the proxy passes upgrades on too.
+      '/api': { target: serverOrigin, ws: true, changeOrigin: false },
     },
   },
   build: {

@@ -11,9 +11,9 @@ export default defineConfig({
     alias: { '@': new URL('./src', import.meta.url).pathname },
   },
   server: {
+    // The live link (socket.io at /api/live) is a WebSocket: the proxy passes upgrades on too.
     proxy: {
-      '/api': server,
-      '/socket.io': { target: server, ws: true },
+      '/api': { target: server, ws: true },
     },
   },
   build: {

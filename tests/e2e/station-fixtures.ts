@@ -11,14 +11,19 @@ export function badgeSecret(): string {
 }
 
 /**
- * An admin creates a station for the machine through the API, signed in the way the web app
- * signs in (CSRF token first), and signs out again: the admin's session is no part of the station.
+ * An admin creates a station for the machine (or a wall board, or the crib station) through the
+ * API, signed in the way the web app signs in (CSRF token first), and signs out again: the
+ * admin's session is no part of the station.
  */
-export async function createStationAsAdmin(request: APIRequestContext, admin: CreatedMember, machineId: string): Promise<StationWithCode> {
+export async function createStationAsAdmin(
+  request: APIRequestContext,
+  admin: CreatedMember,
+  target: string | { kind: 'board' | 'crib'; name?: string },
+): Promise<StationWithCode> {
   const { token } = (await (await request.get('/api/auth/csrf')).json()) as { token: string };
   const headers = { 'x-csrf-token': token };
   expect((await request.post('/api/auth/login', { headers, data: { email: admin.email, password: admin.password } })).status()).toBe(200);
-  const created = await request.post('/api/stations', { headers, data: { machineId } });
+  const created = await request.post('/api/stations', { headers, data: typeof target === 'string' ? { machineId: target } : target });
   expect(created.status()).toBe(201);
   const station = stationWithCodeSchema.parse(await created.json());
   expect((await request.post('/api/auth/logout', { headers })).status()).toBe(204);

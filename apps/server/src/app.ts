@@ -16,7 +16,9 @@ import { profileRoutes } from './modules/profile/profile.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
 import { stationRoutes } from './modules/station/station.routes';
 import { stationsRoutes } from './modules/stations/stations.routes';
+import { tagOutsRoutes } from './modules/tag-outs/tag-outs.routes';
 import { badgesRoutes } from './modules/badges/badges.routes';
+import { boardRoutes } from './modules/board/board.routes';
 import { waiversRoutes } from './modules/waivers/waivers.routes';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { machinesRoutes } from './modules/machines/machines.routes';
@@ -70,6 +72,8 @@ export function createApp(deps: Deps) {
   api.use('/teach', teachRoutes(deps));
   api.use('/audit', auditRoutes(deps));
   api.use(machinesRoutes(deps));
+  api.use(tagOutsRoutes(deps));
+  api.use('/board', boardRoutes(deps));
   api.use(signOffsRoutes(deps));
   api.use(apiNotFound);
   api.use(problemHandler);
@@ -77,5 +81,6 @@ export function createApp(deps: Deps) {
   app.use('/api', api);
   if (config.SERVE_APPS) app.use(staticApps(config));
 
-  return { app, close: sessions.close };
+  // The live-updates handshake reads a person's sign-in through the same session and Passport.
+  return { app, close: sessions.close, signIn: { session: sessions.middleware, passport } };
 }

@@ -5,6 +5,7 @@ import { listen } from './http-server';
 import { startJobs } from './jobs/jobs';
 import { createLogger } from './lib/logger';
 import { createMailer } from './lib/mailer';
+import { createLiveUpdates } from './realtime/live-updates';
 
 async function main(): Promise<void> {
   let config;
@@ -20,10 +21,12 @@ async function main(): Promise<void> {
   const logger = createLogger(config.LOG_LEVEL);
   const db = createDb(config.DATABASE_URL, logger);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
-  const deps = { config, db, logger, mailer };
-  const { app, close } = createApp(deps);
+  const live = createLiveUpdates({ config, db, logger });
+  const deps = { config, db, logger, mailer, live };
+  const { app, close, signIn } = createApp(deps);
   const jobs = await startJobs(deps);
   const http = await listen(app, config.PORT, config.HOST);
+  live.attach(http.server, signIn);
   logger.info({ url: `http://${config.HOST}:${http.port}` }, 'Chuckkey is listening');
 
   let stopping = false;
@@ -31,7 +34,10 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'shutting down: finishing requests in flight');
-    await http.shutdown();
+    // Open sockets hold their connections: they are closed while requests in flight finish.
+    const finished = http.shutdown();
+    await live.close();
+    await finished;
     await close();
     await jobs.stop();
     mailer.close();

@@ -13,3 +13,7 @@ export * from './audit/schemas';
 export * from './stations/schemas';
 export * from './clearance/clearance';
 export * from './stations/check-in';
+export * from './board/schemas';
+export * from './board/state';
+export * from './tag-outs/schemas';
+export * from './live/link';

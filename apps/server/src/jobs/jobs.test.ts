@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Deps } from '../lib/deps';
 import { createLogger } from '../lib/logger';
 import { createMailer, type Mailer } from '../lib/mailer';
+import { quietPublisher } from '../realtime/publisher';
 import { createTestContext, type TestContext } from '../test/harness';
 import { SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, SILENT_STATIONS, SILENT_STATIONS_CRON, startJobs } from './jobs';
 
@@ -16,7 +17,7 @@ beforeAll(() => {
   ctx = createTestContext();
   const logger = createLogger('silent');
   mailer = createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger);
-  deps = { config: ctx.config, db: ctx.db, logger, mailer };
+  deps = { config: ctx.config, db: ctx.db, logger, mailer, live: quietPublisher };
 });
 afterAll(async () => {
   await ctx.db.raw('drop schema if exists ?? cascade', [schema]);

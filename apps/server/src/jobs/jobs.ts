@@ -17,7 +17,8 @@ export const SILENT_STATIONS = 'silent-stations';
 
 /**
  * Every minute: a station silent for three minutes gets its running session closed at its last
- * heartbeat. Closing is one statement on sessions still running, so a repeated run changes nothing.
+ * heartbeat, and its machine is announced offline. Closing is one statement on sessions still
+ * running and each silence is marked once, so a repeated run changes and announces nothing.
  */
 export const SILENT_STATIONS_CRON = '* * * * *';
 

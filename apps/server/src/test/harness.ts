@@ -1,14 +1,17 @@
 import { randomBytes } from 'node:crypto';
 import net from 'node:net';
 import request from 'supertest';
+import { register } from 'tsx/esm/api';
 import { inject } from 'vitest';
 import { STATION_REQUEST_HEADER, type Role } from '@chuckkey/core';
+import { dropDatabase, setupDatabase } from '@chuckkey/db';
 import { createMember, type CreatedMember } from '@chuckkey/db/factories';
 import { createApp } from '../app';
 import { loadConfig, type Config } from '../config';
 import { createDb, type Db } from '../lib/db';
 import { createLogger } from '../lib/logger';
 import { createMailer } from '../lib/mailer';
+import { quietPublisher } from '../realtime/publisher';
 
 export function testConfig(overrides: Record<string, string> = {}): Config {
   return loadConfig({
@@ -39,7 +42,7 @@ export function createTestContext(overrides: Record<string, string> = {}): TestC
   const logger = createLogger(process.env.TEST_LOG_LEVEL ?? 'silent');
   const db = createDb(config.DATABASE_URL, logger, 5);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
-  const { app, close } = createApp({ config, db, logger, mailer });
+  const { app, close } = createApp({ config, db, logger, mailer, live: quietPublisher });
   return {
     app,
     db,
@@ -50,6 +53,24 @@ export function createTestContext(overrides: Record<string, string> = {}): TestC
       await db.destroy();
     },
   };
+}
+
+/**
+ * A database of the test file's own, dropped, created and migrated like the shared one, for tests
+ * of shop-wide state (who is on duty, the opening hours) that tests running beside them also change.
+ */
+export async function ownDatabase(suffix: string): Promise<string> {
+  const url = new URL(inject('databaseUrl'));
+  url.pathname = `${url.pathname}_${suffix}`;
+  // Knex loads migration files with import(); tsx lets this worker import TypeScript.
+  const unregister = register();
+  try {
+    await dropDatabase(url.toString());
+    await setupDatabase(url.toString(), { seed: false });
+  } finally {
+    await unregister();
+  }
+  return url.toString();
 }
 
 /** A client address from the IPv6 documentation range (RFC 3849), unique per call. */

@@ -16,6 +16,8 @@ export const auditActions = [
   'shop.hours_changed',
   'shop.closure_added',
   'shop.closure_removed',
+  'machine.tagged_out',
+  'machine.tag_out_cleared',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

@@ -110,7 +110,7 @@ const anyScenarioArb = fc
           teachers: s.teachers,
           nextClass: s.nextClass === null ? null : { startsAt: at(s.now, s.nextClass) },
         })),
-        taggedOut: s.taggedOut === null ? null : { reason: s.taggedOut },
+        taggedOut: s.taggedOut === null ? null : { reason: s.taggedOut, since: at(s.now, -3_600_000) },
         overdueBlockingTasks: s.tasks.map((name) => ({ name })),
         protectionMinutes: s.protectionMinutes,
       },
@@ -220,7 +220,7 @@ const breakageArb: fc.Arbitrary<Breakage> = fc.oneof(
       f.signOffs.push({ trainingId: 'training-new', level: 'supervised', expiresAt: null, revokedAt: null });
     },
   }),
-  fc.constant<Breakage>({ rule: 4, apply: (f) => void (f.machine.taggedOut = { reason: 'Spindle bearing noise.' }) }),
+  fc.constant<Breakage>({ rule: 4, apply: (f) => void (f.machine.taggedOut = { reason: 'Spindle bearing noise.', since: new Date(0) }) }),
   fc.constant<Breakage>({ rule: 4, apply: (f) => void f.machine.overdueBlockingTasks.push({ name: 'Change the headstock oil' }) }),
   fc.constant<Breakage>({
     rule: 5,

@@ -246,7 +246,7 @@ describe('evaluateClearance()', () => {
 
   describe('rule 4: tag-outs and maintenance', () => {
     it('when the lathe is tagged out, the lathe refuses with tagged_out and gives the reason on the tag', () => {
-      const [reason] = evaluateClearance(withMachine({ taggedOut: { reason: 'Cross-slide gib is loose.' } }), NOW).reasons;
+      const [reason] = evaluateClearance(withMachine({ taggedOut: { reason: 'Cross-slide gib is loose.', since: new Date(NOW.getTime() - 3_600_000) } }), NOW).reasons;
 
       expect(reason).toEqual({
         code: 'tagged_out',
@@ -432,7 +432,7 @@ describe('evaluateClearance()', () => {
   it('returns every failing reason together, in rule order, with the failing rungs first', () => {
     const f = {
       ...withMember({ active: false }),
-      machine: { ...facts().machine, taggedOut: { reason: 'Spindle bearing noise.' } },
+      machine: { ...facts().machine, taggedOut: { reason: 'Spindle bearing noise.', since: new Date(NOW.getTime() - 3_600_000) } },
       shopHours: { open: false },
     };
 

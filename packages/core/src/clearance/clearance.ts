@@ -38,7 +38,8 @@ export interface ClearanceFacts {
     id: string;
     name: string;
     requiredTrainings: RequiredTraining[];
-    taggedOut: { reason: string } | null;
+    /** The open tag-out: its reason and since when. */
+    taggedOut: { reason: string; since: Date } | null;
     overdueBlockingTasks: { name: string }[];
     protectionMinutes?: number;
   };

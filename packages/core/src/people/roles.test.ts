@@ -29,6 +29,14 @@ describe('can()', () => {
     }
   });
 
+  it('lets everyone tag a machine out, an instructor clear their own tag-outs and only an admin clear any', () => {
+    for (const role of roles) expect(can(role, 'create:tag-out:any'), role).toBe(true);
+    expect(can('member', 'clear:tag-out:own')).toBe(false);
+    expect(can('instructor', 'clear:tag-out:own')).toBe(true);
+    expect(can('instructor', 'clear:tag-out:any')).toBe(false);
+    expect(can('admin', 'clear:tag-out:any')).toBe(true);
+  });
+
   it('lets an admin do everything in the permission list', () => {
     for (const permission of permissions) {
       expect(can('admin', permission), permission).toBe(true);

@@ -43,6 +43,9 @@ export const permissions = [
   'manage:station:any',
   'manage:shop:any',
   'read:audit:any',
+  'create:tag-out:any',
+  'clear:tag-out:own',
+  'clear:tag-out:any',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -56,6 +59,8 @@ const memberPermissions: readonly Permission[] = [
   'update:pin:own',
   'update:photo:own',
   'accept:waiver:own',
+  // Whoever finds a machine unsafe may take it out of service.
+  'create:tag-out:any',
 ];
 
 /**
@@ -69,6 +74,8 @@ const instructorPermissions: readonly Permission[] = [
   'revoke:sign-off:any',
   'read:sign-off:any',
   'read:photo:any',
+  // Their own tag-outs only: the machine's fault was theirs to judge, and is theirs to judge fixed.
+  'clear:tag-out:own',
 ];
 
 export const permissionsByRole: Record<Role, readonly Permission[]> = {

@@ -4,7 +4,7 @@ import { MachineFloor } from '../../features/machines/components/machine-floor';
 export default function ShopFloorRoute() {
   return (
     <>
-      <PageHeading title="Shop floor" description="Every machine in the shop, area by area." />
+      <PageHeading title="Shop floor" description="Every machine in the shop, area by area, with its state as it changes on the floor." />
       <MachineFloor />
     </>
   );

@@ -9,6 +9,7 @@ import { createBadge, createMember } from '@chuckkey/db/factories';
 import type { Deps } from '../../lib/deps';
 import { createLogger } from '../../lib/logger';
 import { createMailer } from '../../lib/mailer';
+import { quietPublisher } from '../../realtime/publisher';
 import { borderIsLight, decodeQr, fromRgba } from '../../test/pdf-and-qr';
 import { browser, createTestContext, signedIn, type Browser, type TestContext } from '../../test/harness';
 import { badgesService, type BadgesService } from './badges.service';
@@ -23,6 +24,7 @@ beforeAll(() => {
     db: ctx.db,
     logger: createLogger('silent'),
     mailer: createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, createLogger('silent')),
+    live: quietPublisher,
   };
   service = badgesService(deps);
 });

@@ -3,7 +3,7 @@ import type { Deps } from '../../lib/deps';
 import { dutyRepository } from './duty.repository';
 
 /** Supervisors on duty are shop-wide: one instructor on duty supervises every machine. */
-export function dutyService({ db }: Deps) {
+export function dutyService({ db, live }: Deps) {
   return {
     /** Takes the instructor or admin off duty if they are on, otherwise puts them on. */
     async toggle(supervisor: { id: string; firstName: string }): Promise<StationDutyResult> {
@@ -13,6 +13,7 @@ export function dutyService({ db }: Deps) {
         await duty.startShift(supervisor.id);
         return true;
       });
+      live.shopChanged('duty');
       return { onDuty, supervisor: { firstName: supervisor.firstName } };
     },
   };

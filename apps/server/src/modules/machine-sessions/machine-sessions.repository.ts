@@ -10,6 +10,8 @@ export interface ScanFacts {
   /** The shop's IANA time zone, for the times in the messages. */
   timeZone: string;
   machine: { id: string; name: string; category: MachineCategory; requiresPin: boolean; safetyChecklist: ChecklistItem[] };
+  /** The machine's open tag-out (rule 4). */
+  taggedOut: { reason: string; since: Date } | null;
   member: { id: string; firstName: string; role: Role; active: boolean; waiverOnFile: boolean; hasPhoto: boolean } | null;
   requiredTrainings: { id: string; name: string; teachers: string[] }[];
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: Date | null; revokedAt: Date | null }[];
@@ -48,8 +50,8 @@ export const TEACHERS_NAMED = 3;
  * One statement: the member behind the badge hash (active badge only), whether they accepted the
  * current waiver version, the machine's active required trainings with the first names of up to
  * three instructors who signed each off lately, the member's sign-offs for those trainings in any
- * state, a supervisor on duty, the machine's running session, and the shop's weekly hours and the
- * closures around today (rule 7). With no badge hash (null) the member parts come back empty. The
+ * state, a supervisor on duty, the machine's running session and open tag-out (rule 4), and the
+ * shop's weekly hours and the closures around today (rule 7). With no badge hash (null) the member parts come back empty. The
  * shop's time zone comes along for the wording of times and for deciding whether the shop is open.
  *
  * Two forms: by machine id, and by a station's device token hash, which also answers the station
@@ -130,6 +132,11 @@ select
     where s.machine_id = (select id from machine) and s.ended_at is null
   ) as "runningSession",
   (
+    select json_build_object('reason', t.reason, 'since', t.reported_at)
+    from tag_outs t
+    where t.machine_id = (select id from machine) and t.cleared_at is null
+  ) as "taggedOut",
+  (
     select coalesce(json_agg(json_build_object(
       'weekday', h.weekday, 'opensAt', to_char(h.opens_at, 'HH24:MI'), 'closesAt', to_char(h.closes_at, 'HH24:MI'))), '[]')
     from shop_hours h
@@ -153,6 +160,7 @@ interface FactsRow {
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: string | null; revokedAt: string | null }[];
   supervisorOnDuty: ScanFacts['supervisorOnDuty'];
   runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: string } | null;
+  taggedOut: { reason: string; since: string } | null;
   weeklyHours: WeeklyHours[];
   closures: ClosureDays[];
 }
@@ -176,6 +184,7 @@ function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
   return {
     timeZone: row.timeZone ?? 'UTC',
     machine,
+    taggedOut: row.taggedOut ? { reason: row.taggedOut.reason, since: new Date(row.taggedOut.since) } : null,
     member: row.member,
     requiredTrainings: row.requiredTrainings,
     signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),
@@ -291,8 +300,8 @@ export function machineSessionsRepository(db: Db) {
      * Closes, in one statement, every running session whose station has not been heard from since
      * `cutoff`, each at the station's last contact, and adds the hours to the machines' meters.
      */
-    async closeSilent(cutoff: Date): Promise<{ id: string; endedAt: Date }[]> {
-      const result = await db.raw<{ rows: { id: string; endedAt: Date }[] }>(
+    async closeSilent(cutoff: Date): Promise<{ id: string; machineId: string; endedAt: Date }[]> {
+      const result = await db.raw<{ rows: { id: string; machineId: string; endedAt: Date }[] }>(
         `
         with closed as (
           update machine_sessions s
@@ -309,7 +318,7 @@ export function machineSessionsRepository(db: Db) {
           from (select machine_id, sum(hours) as hours from closed group by machine_id) totals
           where m.id = totals.machine_id
         )
-        select id, ended_at as "endedAt" from closed
+        select id, machine_id as "machineId", ended_at as "endedAt" from closed
         `,
         { cutoff },
       );

@@ -18,7 +18,7 @@ import type { Deps } from '../../lib/deps';
 import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
 import { badgesService } from '../badges/badges.service';
 import { grantToken, grantValid } from '../../lib/tokens';
-import type { StationRecord } from '../stations/stations.repository';
+import { stationsRepository, type StationRecord } from '../stations/stations.repository';
 import { machineSessionsRepository, type EndedBy, type ScanFacts, type SessionRecord } from './machine-sessions.repository';
 
 const SUPERVISING_ROLES = new Set(['instructor', 'admin']);
@@ -47,9 +47,9 @@ function hashOf(badge: string): string | null {
 }
 
 /**
- * The tag-out, maintenance, reservation, crib and balance facts are empty because the shop keeps
- * none of those records yet; the rules for them are already in the decision. Whether the shop is
- * open comes from its hours and closures, read with the other facts, in its time zone.
+ * The maintenance, reservation, crib and balance facts are empty because the shop keeps none of
+ * those records yet; the rules for them are already in the decision. The open tag-out is read with
+ * the other facts. Whether the shop is open comes from its hours and closures, in its time zone.
  */
 function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['member']> }, timeZone: string, now: Date): ClearanceFacts {
   return {
@@ -59,7 +59,7 @@ function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['memb
       id: facts.machine.id,
       name: facts.machine.name,
       requiredTrainings: facts.requiredTrainings.map((t) => ({ id: t.id, name: t.name, teachers: t.teachers, nextClass: null })),
-      taggedOut: null,
+      taggedOut: facts.taggedOut,
       overdueBlockingTasks: [],
     },
     signOffs: facts.signOffs,
@@ -91,7 +91,7 @@ export function stationPhotoAllowed(secret: string, stationId: string, memberId:
 }
 
 export function machineSessionsService(deps: Deps) {
-  const { db } = deps;
+  const { db, live } = deps;
   const sessions = machineSessionsRepository(db);
   const badges = badgesService(deps);
 
@@ -187,6 +187,7 @@ export function machineSessionsService(deps: Deps) {
           stationId: station.id,
           checklist: facts.machine.safetyChecklist,
         });
+        live.machineChanged(session.machineId);
         return { id: session.id, startedAt: session.startedAt.toISOString(), member: { id: member.id, firstName: member.firstName } };
       } catch (error) {
         if (pgCode(error) === UNIQUE_VIOLATION) throw machineInUse();
@@ -198,11 +199,11 @@ export function machineSessionsService(deps: Deps) {
       const machineId = machineOf(station);
       // Who holds the badge is settled before the transaction: it reads another table and hashes nothing slow.
       const holder = input.badge ? await badges.findMemberByCode(input.badge) : null;
-      return db.transaction(async (trx) => {
+      const { ended, changed } = await db.transaction(async (trx) => {
         const repo = machineSessionsRepository(trx);
         const session = await repo.findForUpdate(sessionId);
         if (!session || session.machineId !== machineId) throw notFound('session_not_found', 'There is no such session on this machine.');
-        if (session.endIdempotencyKey === input.idempotencyKey) return toEnded(session);
+        if (session.endIdempotencyKey === input.idempotencyKey) return { ended: toEnded(session), changed: false };
         if (session.endedAt) throw conflict('already_ended', 'This session has already ended.');
         if (await repo.findByEndKey(input.idempotencyKey)) {
           throw conflict('idempotency_key_reused', 'That idempotency key already ended another session. Send a new key for each end.');
@@ -228,8 +229,11 @@ export function machineSessionsService(deps: Deps) {
           });
         }
         const clamped = endedAt.getTime() > now.getTime() ? now : endedAt;
-        return toEnded(await repo.end(session.id, { endedAt: clamped, endedBy, idempotencyKey: input.idempotencyKey }));
+        return { ended: toEnded(await repo.end(session.id, { endedAt: clamped, endedBy, idempotencyKey: input.idempotencyKey })), changed: true };
       });
+      // A replayed end changed nothing, so there is nothing to announce.
+      if (changed) live.machineChanged(machineId);
+      return ended;
     },
 
     async state(station: StationRecord): Promise<StationState> {
@@ -247,9 +251,14 @@ export function machineSessionsService(deps: Deps) {
     /**
      * Ends the sessions of stations silent for HEARTBEAT_SILENCE_MINUTES before `now`, at their last
      * contact: the member most likely stopped then, and the meter should not count the silence.
+     * Their machines, and those of every station that has just gone silent, show offline now.
      */
-    async closeSilentSessions(now: Date): Promise<{ id: string; endedAt: Date }[]> {
-      return sessions.closeSilent(new Date(now.getTime() - HEARTBEAT_SILENCE_MINUTES * 60_000));
+    async closeSilentSessions(now: Date): Promise<{ id: string; machineId: string; endedAt: Date }[]> {
+      const cutoff = new Date(now.getTime() - HEARTBEAT_SILENCE_MINUTES * 60_000);
+      const closed = await sessions.closeSilent(cutoff);
+      const silenced = await stationsRepository(db).markSilent(cutoff);
+      for (const machineId of new Set([...closed.map((session) => session.machineId), ...silenced])) live.machineChanged(machineId);
+      return closed;
     },
   };
 }

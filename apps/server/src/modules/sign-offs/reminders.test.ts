@@ -4,6 +4,7 @@ import { createMachine, createMember, createSignOff, createTraining } from '@chu
 import type { Deps } from '../../lib/deps';
 import { createLogger } from '../../lib/logger';
 import { createMailer, type Mailer } from '../../lib/mailer';
+import { quietPublisher } from '../../realtime/publisher';
 import { caughtMail, countMail, createTestContext, type TestContext } from '../../test/harness';
 import { signOffRemindersService } from './reminders.service';
 
@@ -14,7 +15,7 @@ beforeAll(() => {
   ctx = createTestContext();
   const logger = createLogger('silent');
   mailer = createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger);
-  deps = { config: ctx.config, db: ctx.db, logger, mailer };
+  deps = { config: ctx.config, db: ctx.db, logger, mailer, live: quietPublisher };
 });
 afterAll(async () => {
   mailer.close();

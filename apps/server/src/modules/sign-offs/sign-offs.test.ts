@@ -6,6 +6,7 @@ import { signOffExpiry, signOffListSchema, signOffSchema } from '@chuckkey/core'
 import { createMachine, createMember, createSignOff, createTraining } from '@chuckkey/db/factories';
 import { createLogger } from '../../lib/logger';
 import { createMailer } from '../../lib/mailer';
+import { quietPublisher } from '../../realtime/publisher';
 import { browser, createTestContext, signedIn, type TestContext } from '../../test/harness';
 import { signOffsService } from './sign-offs.service';
 
@@ -230,7 +231,7 @@ describe('POST /api/sign-offs', () => {
 
 describe('signOffsService(deps).create', () => {
   const logger = createLogger('silent');
-  const service = () => signOffsService({ config: ctx.config, db: ctx.db, logger, mailer: createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger) });
+  const service = () => signOffsService({ config: ctx.config, db: ctx.db, logger, mailer: createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger), live: quietPublisher });
   const asUser = (row: Awaited<ReturnType<typeof createMember>>): Express.User => ({
     id: row.id,
     email: row.email,

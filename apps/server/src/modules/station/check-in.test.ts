@@ -7,8 +7,9 @@ import { createSignOff, createTraining, createWaiverVersion, recordWaiver } from
 import type { Deps } from '../../lib/deps';
 import { createLogger } from '../../lib/logger';
 import { createMailer } from '../../lib/mailer';
+import { quietPublisher } from '../../realtime/publisher';
 import { machineSessionsService } from '../machine-sessions/machine-sessions.service';
-import { browser, createTestContext, type TestContext } from '../../test/harness';
+import { browser, createTestContext, signedIn, type TestContext } from '../../test/harness';
 import { badgeHolder, pairedDevice, type BadgeHolder } from './station.fixtures';
 import { SCANS_PER_MINUTE } from './station.routes';
 
@@ -26,7 +27,7 @@ beforeAll(async () => {
   await unregister();
   ctx = createTestContext({ DATABASE_URL: url.toString() });
   const logger = createLogger('silent');
-  deps = { config: ctx.config, db: ctx.db, logger, mailer: createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger) };
+  deps = { config: ctx.config, db: ctx.db, logger, mailer: createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger), live: quietPublisher };
   // Every member below must have accepted the newest waiver version to be cleared.
   await createWaiverVersion(ctx.db);
 });
@@ -220,6 +221,27 @@ describe('POST /api/station/scan', () => {
     const { device, teacher } = await arrange();
     const res = await device.post('/api/station/scan', { badge: teacher.badge });
     expect(res.body.canSupervise).toBe(true);
+  });
+
+  describe('tag-outs (rule 4)', () => {
+    it('a tagged-out machine refuses a cleared member with the tag’s reason, still in one statement; once cleared, they may start', async () => {
+      const { admin, device, machine, member } = await arrange();
+      const reporter = await signedIn(ctx, 'member');
+      expect((await reporter.post(`/api/machines/${machine.id}/tag-out`, { reason: 'Chuck guard cracked.' })).status).toBe(201);
+
+      const { statements, answer } = await scanCountingStatements(device, member.badge);
+      expect(answer.cleared).toBe(false);
+      expect(answer.reasons).toEqual([expect.objectContaining({ code: 'tagged_out', rule: 4, message: `${machine.name} is tagged out: Chuck guard cracked.` })]);
+      expect(statements).toHaveLength(1);
+      expect(statements[0]).toContain('tag_outs');
+      const refused = await start(device, member);
+      expect(refused.status).toBe(409);
+      expect(refused.body.reasons.map((r: { code: string }) => r.code)).toEqual(['tagged_out']);
+
+      expect((await admin.post(`/api/machines/${machine.id}/tag-out/clear`, { note: 'New guard fitted.' })).status).toBe(200);
+      expect((await scanCountingStatements(device, member.badge)).answer.cleared).toBe(true);
+      expect((await start(device, member)).status).toBe(201);
+    });
   });
 
   describe('opening hours (rule 7)', () => {

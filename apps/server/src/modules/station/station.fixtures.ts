@@ -1,4 +1,4 @@
-import type { Role, StationWithCode } from '@chuckkey/core';
+import { STATION_COOKIE, type Role, type StationWithCode } from '@chuckkey/core';
 import { hashPassword } from '@chuckkey/db';
 import { createBadge, createMachine, createMember, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
 import { browser, signedIn, type TestContext } from '../../test/harness';
@@ -20,7 +20,28 @@ export async function pairedDevice(ctx: TestContext) {
   const device = await browser(ctx);
   const res = await device.post('/api/station/pair', { pairingCode: created.station.pairingCode });
   if (res.status !== 200) throw new Error(`pairing failed: ${res.status} ${JSON.stringify(res.body)}`);
-  return { ...created, device };
+  return { ...created, device, cookie: setCookie(res, STATION_COOKIE) };
+}
+
+/** The `name=value` of a cookie the answer set, for sending it from a client that keeps none. */
+export function setCookie(res: { headers: Record<string, unknown> }, name: string): string {
+  const cookies = (res.headers['set-cookie'] as string[] | undefined) ?? [];
+  // The device cookie's answer first removes the one at its earlier path: that one is empty.
+  const cookie = cookies.find((c) => c.startsWith(`${name}=`) && !c.startsWith(`${name}=;`));
+  if (!cookie) throw new Error(`the answer set no ${name} cookie`);
+  return cookie.split(';')[0] ?? '';
+}
+
+/** A wall board's browser, paired with a new board station; `cookie` is its device cookie. */
+export async function pairedBoard(ctx: TestContext) {
+  const admin = await signedIn(ctx, 'admin');
+  const created = await admin.post('/api/stations', { kind: 'board' });
+  if (created.status !== 201) throw new Error(`board create failed: ${created.status} ${JSON.stringify(created.body)}`);
+  const station = created.body as StationWithCode;
+  const device = await browser(ctx);
+  const res = await device.post('/api/station/pair', { pairingCode: station.pairingCode });
+  if (res.status !== 200) throw new Error(`pairing failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { admin, station, device, cookie: setCookie(res, STATION_COOKIE) };
 }
 
 export interface BadgeHolder {

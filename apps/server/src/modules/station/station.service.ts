@@ -65,15 +65,17 @@ export function stationService(deps: Deps) {
     /** Uses the code and hands back the device token; only its SHA-256 is kept. */
     async pair(pairingCode: string): Promise<{ token: string; stationId: string }> {
       const token = randomToken();
-      const stationId = await db.transaction(async (trx) => {
-        const paired = await stationsRepository(trx).pair(pairingCodeHash(config.SESSION_SECRET, pairingCode), hashToken(token));
-        if (!paired) return undefined;
-        await auditLog(trx).record({ actorId: null, action: 'station.paired', entity: 'station', entityId: paired });
-        return paired;
+      const paired = await db.transaction(async (trx) => {
+        const station = await stationsRepository(trx).pair(pairingCodeHash(config.SESSION_SECRET, pairingCode), hashToken(token));
+        if (!station) return undefined;
+        await auditLog(trx).record({ actorId: null, action: 'station.paired', entity: 'station', entityId: station.id });
+        return station;
       });
       // One answer for a wrong, expired or used code, so trying codes tells nothing about them.
-      if (!stationId) throw badRequest('invalid_pairing_code', 'That pairing code is wrong, expired or already used. Ask an admin for a new one.');
-      return { token, stationId };
+      if (!paired) throw badRequest('invalid_pairing_code', 'That pairing code is wrong, expired or already used. Ask an admin for a new one.');
+      // A freshly paired station reports on its machine from now on (it may have shown offline).
+      if (paired.machineId) deps.live.machineChanged(paired.machineId);
+      return { token, stationId: paired.id };
     },
 
     async self(stationId: string): Promise<StationSelf> {

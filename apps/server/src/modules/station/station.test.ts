@@ -12,9 +12,10 @@ beforeAll(() => {
 });
 afterAll(() => ctx.close());
 
+/** The device cookie the answer sets at its path, /api (the one at the earlier path is only ever removed). */
 function stationCookie(res: { headers: Record<string, unknown> }): string | undefined {
   const cookies = (res.headers['set-cookie'] as string[] | undefined) ?? [];
-  return cookies.find((cookie) => cookie.startsWith(`${STATION_COOKIE}=`));
+  return cookies.find((cookie) => cookie.startsWith(`${STATION_COOKIE}=`) && /; Path=\/api(;|$)/i.test(cookie));
 }
 
 function cookieValue(cookie: string): string {
@@ -24,7 +25,7 @@ function cookieValue(cookie: string): string {
 const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
 
 describe('POST /api/station/pair', () => {
-  it('sets an HttpOnly, SameSite=Strict device cookie for the station routes and answers the station', async () => {
+  it('sets an HttpOnly, SameSite=Strict device cookie for the API and answers the station', async () => {
     const { station, machine } = await createStation(ctx);
     const device = await browser(ctx);
 
@@ -34,11 +35,24 @@ describe('POST /api/station/pair', () => {
     expect(stationSelfSchema.parse(res.body)).toMatchObject({ id: station.id, kind: 'machine', machine: { id: machine.id, name: machine.name } });
     const cookie = stationCookie(res);
     expect(cookie).toBeDefined();
-    // RFC 6265 attributes: not readable by scripts, never sent from another site, only to /api/station.
+    // RFC 6265 attributes: not readable by scripts, never sent from another site, only to /api
+    // (the station routes, the board and the live-updates handshake read it; decision 010).
     expect(cookie).toMatch(/; HttpOnly/i);
     expect(cookie).toMatch(/; SameSite=Strict/i);
-    expect(cookie).toMatch(/; Path=\/api\/station(;|$)/i);
+    expect(cookie).toMatch(/; Path=\/api(;|$)/i);
     expect(cookie).not.toMatch(/; Secure/i);
+  });
+
+  it('removes the cookie a device may still hold at the earlier path, /api/station', async () => {
+    const { station } = await createStation(ctx);
+    const res = await (await browser(ctx)).post('/api/station/pair', { pairingCode: station.pairingCode });
+
+    // RFC 6265 §5.3: a cookie is replaced or removed only by one of the same name, domain and path.
+    const cookies = (res.headers['set-cookie'] as unknown as string[]).filter((cookie) => cookie.startsWith(`${STATION_COOKIE}=`));
+    expect(cookies).toHaveLength(2);
+    expect(cookies[0]).toMatch(/; Path=\/api\/station(;|$)/i);
+    expect(cookies[0]).toMatch(/Expires=Thu, 01 Jan 1970/);
+    expect(cookies[1]).toMatch(/; Path=\/api(;|$)/i);
   });
 
   it('the device token has 256 random bits and only its SHA-256 is stored', async () => {

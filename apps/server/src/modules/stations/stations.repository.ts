@@ -108,9 +108,9 @@ export function stationsRepository(db: Db) {
 
     /**
      * Uses a pairing code in one statement, so two devices racing with the same code cannot both
-     * win; the code is gone afterwards. Returns the paired station's id.
+     * win; the code is gone afterwards. Returns the paired station's id and machine.
      */
-    async pair(pairingCodeHash: string, deviceTokenHash: string): Promise<string | undefined> {
+    async pair(pairingCodeHash: string, deviceTokenHash: string): Promise<{ id: string; machineId: string | null } | undefined> {
       const [row] = await db('stations')
         .where({ pairing_code_hash: pairingCodeHash })
         .where('pairing_expires_at', '>', db.fn.now())
@@ -121,9 +121,10 @@ export function stationsRepository(db: Db) {
           paired_at: db.fn.now(),
           last_seen_at: db.fn.now(),
           revoked_at: null,
+          silence_reported_at: null,
         })
-        .returning<{ id: string }[]>('id');
-      return row?.id;
+        .returning<{ id: string; machineId: string | null }[]>(['id', 'machine_id as machineId']);
+      return row;
     },
 
     /** Forgets the device token and any open code, so the device is refused from its next request. */
@@ -135,9 +136,30 @@ export function stationsRepository(db: Db) {
       return updated > 0;
     },
 
+    /** Records a contact; a silence announced before is over. */
     async touch(id: string): Promise<Date> {
-      const [row] = await db('stations').where({ id }).update({ last_seen_at: db.fn.now() }).returning<{ last_seen_at: Date }[]>('last_seen_at');
+      const [row] = await db('stations')
+        .where({ id })
+        .update({ last_seen_at: db.fn.now(), silence_reported_at: null })
+        .returning<{ last_seen_at: Date }[]>('last_seen_at');
       return row?.last_seen_at ?? new Date();
+    },
+
+    /**
+     * Marks the paired machine stations not heard from since `cutoff` whose silence was not
+     * announced yet, and answers their machines: each silence is announced once, whichever
+     * process runs the job.
+     */
+    async markSilent(cutoff: Date): Promise<string[]> {
+      const rows = await db('stations')
+        .where({ kind: 'machine' })
+        .whereNotNull('device_token_hash')
+        .whereNull('revoked_at')
+        .whereNull('silence_reported_at')
+        .where('last_seen_at', '<', cutoff)
+        .update({ silence_reported_at: db.fn.now() })
+        .returning<{ machine_id: string }[]>('machine_id');
+      return [...new Set(rows.map((row) => row.machine_id))];
     },
 
     async recordPinAttempt(stationId: string, memberId: string, succeeded: boolean): Promise<void> {

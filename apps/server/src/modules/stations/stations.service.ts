@@ -31,7 +31,7 @@ const defaultNames = { crib: 'Tool crib', board: 'Board' } as const;
 
 const stationNotFound = () => notFound('station_not_found', 'There is no station with that id.');
 
-export function stationsService({ config, db }: Deps) {
+export function stationsService({ config, db, live }: Deps) {
   const stations = stationsRepository(db);
 
   function issueCode(): { code: string; hash: string; expiresAt: Date } {
@@ -86,13 +86,17 @@ export function stationsService({ config, db }: Deps) {
     },
 
     async revoke(actor: Express.User, id: string): Promise<Station> {
-      await db.transaction(async (trx) => {
+      const revoked = await db.transaction(async (trx) => {
         const repository = stationsRepository(trx);
         const existing = await repository.findById(id);
         if (!existing) throw stationNotFound();
         if (!(await repository.revoke(id))) throw conflict('already_revoked', 'This station was already revoked.');
         await auditLog(trx).record({ actorId: actor.id, action: 'station.revoked', entity: 'station', entityId: id, details: { name: existing.name } });
+        return existing;
       });
+      live.stationRevoked(id);
+      // A machine without a reporting station is no longer offline because of this one.
+      if (revoked.machineId) live.machineChanged(revoked.machineId);
       return load(id);
     },
   };

@@ -24,6 +24,8 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'shop.hours_changed': 'Opening hours changed',
   'shop.closure_added': 'Closure added',
   'shop.closure_removed': 'Closure removed',
+  'machine.tagged_out': 'Machine tagged out',
+  'machine.tag_out_cleared': 'Tag-out cleared',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {

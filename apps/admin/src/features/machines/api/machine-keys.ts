@@ -4,4 +4,5 @@ export const machineKeys = {
   list: () => [...machineKeys.lists()] as const,
   details: () => [...machineKeys.all, 'detail'] as const,
   detail: (id: string) => [...machineKeys.details(), id] as const,
+  states: () => [...machineKeys.all, 'states'] as const,
 };

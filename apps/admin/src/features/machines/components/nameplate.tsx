@@ -1,13 +1,22 @@
-import { machineCategoryLabels, type MachineDetail } from '@chuckkey/core';
+import { machineCategoryLabels, type BoardMachine, type MachineDetail } from '@chuckkey/core';
 import { useId } from 'react';
 import { formatHours } from '../../../lib/format';
+import { MachineStateLine } from './machine-state-line';
 
 function Rivet() {
   return <span aria-hidden="true" className="size-2 shrink-0 rounded-full bg-neutral-500 ring-1 ring-neutral-900" />;
 }
 
-/** The machine as its riveted maker's plate: name stamped in capitals on a band, the facts below. */
-export function Nameplate({ machine }: { machine: MachineDetail }) {
+interface NameplateProps {
+  machine: MachineDetail;
+  /** The machine's live state, once known. */
+  live?: BoardMachine | undefined;
+  /** Writes an instant on the shop's clock. */
+  time: (iso: string) => string;
+}
+
+/** The machine as its riveted maker's plate: name stamped in capitals on a band, its state and the facts below. */
+export function Nameplate({ machine, live, time }: NameplateProps) {
   const nameId = useId();
   return (
     <article aria-labelledby={nameId} className="flex flex-col overflow-hidden rounded-md border-2 border-neutral-800 bg-white">
@@ -18,6 +27,7 @@ export function Nameplate({ machine }: { machine: MachineDetail }) {
         </h3>
         <Rivet />
       </div>
+      {live && <MachineStateLine machine={live} time={time} />}
       <dl className="flex flex-1 flex-col gap-2 px-3 py-3">
         <div>
           <dt className="sr-only">Category</dt>

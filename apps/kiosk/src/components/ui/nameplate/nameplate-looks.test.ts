@@ -17,6 +17,10 @@ describe('nameplate looks', () => {
     expect(new Set(icons).size).toBe(nameplateStates.length);
   });
 
+  it('knows exactly the states of the board', () => {
+    expect(nameplateStates).toEqual(['available', 'in_use', 'reserved', 'tagged_out', 'offline']);
+  });
+
   it('stripes a tagged-out plate and leaves an offline plate as a grey outline', () => {
     expect(nameplateLook('tagged_out').plate).toContain('stripes-tagged-out');
     expect(nameplateLook('offline').plate).toContain('bg-transparent');

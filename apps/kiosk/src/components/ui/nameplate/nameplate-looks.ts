@@ -1,5 +1,8 @@
-export const nameplateStates = ['available', 'in_use', 'reserved_next', 'tagged_out', 'offline'] as const;
-export type NameplateState = (typeof nameplateStates)[number];
+import { BOARD_STATES, type BoardState } from '@chuckkey/core';
+
+/** A plate shows the machine states of the board (GET /api/board, `machine:update`). */
+export const nameplateStates = BOARD_STATES;
+export type NameplateState = BoardState;
 
 export type NameplateIconName = 'check' | 'chuck' | 'hourglass' | 'padlock' | 'unplugged';
 
@@ -25,7 +28,7 @@ const looks: Record<NameplateState, NameplateLook> = {
     plate: 'bg-state-in-use border-state-in-use text-white',
     band: 'bg-black/30',
   },
-  reserved_next: {
+  reserved: {
     label: 'Reserved next',
     icon: 'hourglass',
     plate: 'bg-state-reserved border-state-reserved text-white',
@@ -49,7 +52,11 @@ export function nameplateLook(state: NameplateState): NameplateLook {
   return looks[state];
 }
 
-export const nameplateSizes = ['sm', 'md', 'lg'] as const;
+/**
+ * Three fixed sizes, and `fit`: every measure in em of the plate's own font size, so that the
+ * board sets one font size per plate and the whole plate scales with it.
+ */
+export const nameplateSizes = ['sm', 'md', 'lg', 'fit'] as const;
 export type NameplateSize = (typeof nameplateSizes)[number];
 
 interface SizeClasses {
@@ -67,9 +74,9 @@ const sizes: Record<NameplateSize, SizeClasses> = {
   sm: {
     plate: 'border-2 rounded',
     band: 'px-2 py-0.5 gap-2',
-    name: 'text-plate-name-sm',
+    name: 'text-plate-name-sm tracking-[0.12em]',
     body: 'px-3 py-2 gap-1',
-    state: 'text-plate-state-sm gap-2',
+    state: 'text-plate-state-sm leading-tight gap-2',
     icon: 'size-6',
     detail: 'text-plate-detail-sm',
     rivet: 'size-1.5',
@@ -77,9 +84,9 @@ const sizes: Record<NameplateSize, SizeClasses> = {
   md: {
     plate: 'border-4 rounded-md',
     band: 'px-3 py-1 gap-3',
-    name: 'text-plate-name-md',
+    name: 'text-plate-name-md tracking-[0.12em]',
     body: 'px-4 py-3 gap-1.5',
-    state: 'text-plate-state-md gap-3',
+    state: 'text-plate-state-md leading-tight gap-3',
     icon: 'size-9',
     detail: 'text-plate-detail-md',
     rivet: 'size-2',
@@ -87,12 +94,24 @@ const sizes: Record<NameplateSize, SizeClasses> = {
   lg: {
     plate: 'border-4 rounded-lg',
     band: 'px-4 py-1.5 gap-4',
-    name: 'text-plate-name-lg',
+    name: 'text-plate-name-lg tracking-[0.12em]',
     body: 'px-6 py-4 gap-2',
-    state: 'text-plate-state-lg gap-4',
+    state: 'text-plate-state-lg leading-tight gap-4',
     icon: 'size-14',
     detail: 'text-plate-detail-lg',
     rivet: 'size-2.5',
+  },
+  // The heights here add up to just under PLATE_HEIGHT_EM of the board's layout: keep the two in step.
+  fit: {
+    plate: 'border-[0.12em] rounded-[0.3em]',
+    band: 'px-[0.45em] py-[0.1em] gap-[0.3em]',
+    // A touch smaller than the rest, so that more of a long name fits the band.
+    name: 'text-[0.92em] leading-[1.3] tracking-[0.06em]',
+    body: 'px-[0.55em] py-[0.2em] gap-[0.1em]',
+    state: 'text-[1.4em] leading-[1.15] gap-[0.3em]',
+    icon: 'size-[1.05em]',
+    detail: 'text-[0.9em] leading-[1.2]',
+    rivet: 'size-[0.35em]',
   },
 };
 

@@ -13,7 +13,9 @@ export function usePairStation() {
     mutationFn: pairStation,
     onSuccess: async (station) => {
       queryClient.setQueryData(stationKeys.self(), station);
-      await queryClient.invalidateQueries({ queryKey: stationKeys.all });
+      // The device is someone new to the server now: whatever it asked before (a board's 401
+      // included) is asked again.
+      await queryClient.invalidateQueries();
     },
   });
 }

@@ -11,8 +11,14 @@ function pairingMessage(error: unknown): string {
   return 'Something went wrong. Try again.';
 }
 
+interface PairScreenProps {
+  shopName: string;
+  /** What the screen is once paired, for the sentence on what pairing does. */
+  becomes?: string;
+}
+
 /** The code field and what pairing does; the code is sent as soon as all 8 characters are in. */
-export function PairScreen({ shopName }: { shopName: string }) {
+export function PairScreen({ shopName, becomes = 'a machine’s station' }: PairScreenProps) {
   const id = useId();
   const pair = usePairStation();
   const [code, setCode] = useState('');
@@ -37,7 +43,7 @@ export function PairScreen({ shopName }: { shopName: string }) {
     <form onSubmit={submit} className="flex max-w-[44ch] flex-col items-center gap-8 text-center" noValidate>
       <h1 className="text-kiosk-title font-bold text-balance">{shopName}</h1>
       <p id={`${id}-what`} className="text-kiosk-lead text-balance">
-        This screen becomes a machine’s station once an admin pairs it: type the 8-character pairing code the admin gives you.
+        This screen becomes {becomes} once an admin pairs it: type the 8-character pairing code the admin gives you.
       </p>
       <div className="flex flex-col items-center gap-3">
         <label htmlFor={`${id}-code`} className="text-kiosk-body font-bold">

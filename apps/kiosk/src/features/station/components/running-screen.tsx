@@ -1,8 +1,8 @@
 import { useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
-import { useNow } from '../hooks/use-now';
-import { describeElapsed, formatElapsed } from '../utils/elapsed';
+import { useNow } from '@/hooks/use-now';
+import { describeElapsed, formatElapsed } from '@/lib/elapsed';
 import { BadgeReader } from './badge-reader';
 
 /** A session runs: the time so far in digits readable across the shop, and the way to end it. */

@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 
-/** The current time, once a second, for the running clock. */
+/** The current time, once a second, for clocks that count seconds (a running session). */
 export function useNow(intervalMs = 1000): number {
   const [now, setNow] = useState(() => Date.now());
   useEffect(() => {

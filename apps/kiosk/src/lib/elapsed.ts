@@ -1,6 +1,7 @@
 /**
- * Elapsed time as the running screen shows it: `mm:ss` for the first hour, then `h:mm:ss`.
- * A start a little in the future (the station's clock behind the server's) reads as 00:00.
+ * Elapsed time as the station's running screen and the board's nameplates show it: `mm:ss` for
+ * the first hour, then `h:mm:ss`. A start a little in the future (the screen's clock behind the
+ * server's) reads as 00:00.
  */
 export function formatElapsed(ms: number): string {
   const total = Math.max(0, Math.floor(ms / 1000));

@@ -1,0 +1,113 @@
+import type { ClosureDays, MachineCategory, WeeklyHours } from '@chuckkey/core';
+import type { Db } from '../../lib/db';
+import { preparedRows } from '../../lib/prepared';
+
+/** What decides one machine's tile, as read from the database; names stay here, not in answers. */
+export interface MachineTileRow {
+  id: string;
+  name: string;
+  category: MachineCategory;
+  tagOut: { reason: string; since: string } | null;
+  session: { startedAt: string; firstName: string; lastName: string } | null;
+  /** Paired, unrevoked stations at the machine, and the latest contact of any of them. */
+  stations: number;
+  lastHeardAt: string | null;
+}
+
+export interface BoardRow {
+  shop: { name: string; timeZone: string } | null;
+  weeklyHours: WeeklyHours[];
+  closures: ClosureDays[];
+  supervisor: { firstName: string; lastName: string } | null;
+  areas: { id: string; name: string; machines: MachineTileRow[] }[];
+}
+
+/*
+ * Per machine: its open tag-out (at most one, by a unique index), its running session with the
+ * member's name, and its paired, unrevoked stations (a revoked one has no device token). Written
+ * once and used by both statements below, so a tile and a `machine:update` never disagree.
+ */
+const tileColumns = `
+  m.id, m.name, m.category,
+  (
+    select json_build_object('reason', t.reason, 'since', t.reported_at)
+    from tag_outs t where t.machine_id = m.id and t.cleared_at is null
+  ) as "tagOut",
+  (
+    select json_build_object('startedAt', s.started_at, 'firstName', p.first_name, 'lastName', p.last_name)
+    from machine_sessions s join members p on p.id = s.member_id
+    where s.machine_id = m.id and s.ended_at is null
+  ) as session,
+  heard.stations, heard."lastHeardAt"`;
+
+const heardJoin = `
+  cross join lateral (
+    select count(*)::int as stations, max(st.last_seen_at) as "lastHeardAt"
+    from stations st
+    where st.machine_id = m.id and st.kind = 'machine' and st.device_token_hash is not null and st.revoked_at is null
+  ) heard`;
+
+/*
+ * The whole board in one statement: the shop, its weekly hours and the closures around today (the
+ * shop's date may be a day off the database's), the longest-serving supervisor on duty, and every
+ * area that has machines, in the shop's order, with its machines by name.
+ */
+const BOARD_SQL = `
+with tiles as (
+  select m.area_id, ${tileColumns}
+  from machines m ${heardJoin}
+)
+select
+  (select json_build_object('name', name, 'timeZone', time_zone) from shop where id = 1) as shop,
+  (
+    select coalesce(json_agg(json_build_object(
+      'weekday', h.weekday, 'opensAt', to_char(h.opens_at, 'HH24:MI'), 'closesAt', to_char(h.closes_at, 'HH24:MI'))), '[]')
+    from shop_hours h
+  ) as "weeklyHours",
+  (
+    select coalesce(json_agg(json_build_object('startsOn', c.starts_on, 'endsOn', c.ends_on, 'reason', c.reason)), '[]')
+    from shop_closures c
+    where c.ends_on >= current_date - 1 and c.starts_on <= current_date + 1
+  ) as closures,
+  (
+    select json_build_object('firstName', p.first_name, 'lastName', p.last_name)
+    from duty_shifts d join members p on p.id = d.member_id
+    where d.ended_at is null and p.active and p.role in ('instructor', 'admin')
+    order by d.started_at
+    limit 1
+  ) as supervisor,
+  (
+    select coalesce(json_agg(json_build_object('id', a.id, 'name', a.name, 'machines', area.machines) order by a.sort_order, a.name), '[]')
+    from areas a
+    cross join lateral (
+      select json_agg(json_build_object(
+        'id', t.id, 'name', t.name, 'category', t.category, 'tagOut', t."tagOut", 'session', t.session,
+        'stations', t.stations, 'lastHeardAt', t."lastHeardAt") order by t.name) as machines
+      from tiles t where t.area_id = a.id
+    ) area
+    where area.machines is not null
+  ) as areas
+`;
+
+const MACHINE_TILE_SQL = `
+select ${tileColumns}
+from machines m ${heardJoin}
+where m.id = $1::uuid
+`;
+
+export function boardRepository(db: Db) {
+  return {
+    /** Every board request reads this, and every client refetches on each event: prepared once per connection. */
+    async board(): Promise<BoardRow> {
+      const [row] = await preparedRows<BoardRow>(db, 'board', BOARD_SQL, []);
+      if (!row) throw new Error('the board statement returned no row');
+      return row;
+    },
+
+    /** One machine's tile, for its `machine:update`; undefined when the machine no longer exists. */
+    async machine(machineId: string): Promise<MachineTileRow | undefined> {
+      const [row] = await preparedRows<MachineTileRow>(db, 'board_machine', MACHINE_TILE_SQL, [machineId]);
+      return row;
+    },
+  };
+}
