@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { nameplateLook, nameplateStates } from './nameplate-looks';
+import { fitNameScale, nameplateLook, nameplateStates } from './nameplate-looks';
 
 describe('nameplate looks', () => {
   it('names every state in the words of the shop floor', () => {
@@ -25,5 +25,14 @@ describe('nameplate looks', () => {
     expect(nameplateLook('tagged_out').plate).toContain('stripes-tagged-out');
     expect(nameplateLook('offline').plate).toContain('bg-transparent');
     expect(nameplateLook('offline').plate).toContain('border-state-offline');
+  });
+});
+
+describe('fitNameScale', () => {
+  it('keeps short names at full size and sets longer ones smaller in proportion, to a floor', () => {
+    expect(fitNameScale('Drill press')).toBe(1);
+    expect(fitNameScale('MIG welder 1')).toBe(1);
+    expect(fitNameScale('Horizontal band saw')).toBeCloseTo(13 / 19, 5);
+    expect(fitNameScale('A very long machine name for a small plate')).toBe(0.6);
   });
 });

@@ -118,3 +118,14 @@ const sizes: Record<NameplateSize, SizeClasses> = {
 export function nameplateSize(size: NameplateSize): SizeClasses {
   return sizes[size];
 }
+
+/**
+ * On a `fit` plate, names up to this many characters take the band's full size; a longer one is set
+ * smaller in proportion (down to FIT_NAME_MIN_SCALE), so that a wall board shows it whole.
+ */
+const FIT_NAME_CHARACTERS = 13;
+const FIT_NAME_MIN_SCALE = 0.6;
+
+export function fitNameScale(name: string): number {
+  return Math.max(FIT_NAME_MIN_SCALE, Math.min(1, FIT_NAME_CHARACTERS / Math.max(1, name.length)));
+}

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Icon } from '../icon';
-import { nameplateLook, nameplateSize, type NameplateSize, type NameplateState } from './nameplate-looks';
+import { fitNameScale, nameplateLook, nameplateSize, type NameplateSize, type NameplateState } from './nameplate-looks';
 
 export interface NameplateProps {
   name: string;
@@ -25,7 +25,11 @@ export function Nameplate({ name, state, detail, aside, size = 'md', detailLines
       <div className={`flex items-center ${sized.band} ${look.band}`}>
         {rivet}
         {/* CSS capitals keep the name spelled normally for screen readers. */}
-        <span className={`min-w-0 flex-1 truncate text-center font-bold uppercase ${sized.name}`}>
+        <span
+          className={`min-w-0 flex-1 truncate text-center font-bold uppercase ${sized.name}`}
+          // The line keeps its height whatever the name's size, so the plates of a board line up.
+          style={size === 'fit' ? { fontSize: `${0.92 * fitNameScale(name)}em`, lineHeight: 1.3 / fitNameScale(name) } : undefined}
+        >
           {name}
         </span>
         {rivet}
