@@ -13,6 +13,7 @@ import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
 import { outboxRoutes } from './modules/outbox/outbox.routes';
 import { profileRoutes } from './modules/profile/profile.routes';
+import { reservationsRoutes } from './modules/reservations/reservations.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
 import { stationRoutes } from './modules/station/station.routes';
 import { stationsRoutes } from './modules/stations/stations.routes';
@@ -75,6 +76,7 @@ export function createApp(deps: Deps) {
   api.use(tagOutsRoutes(deps));
   api.use('/board', boardRoutes(deps));
   api.use(signOffsRoutes(deps));
+  api.use(reservationsRoutes(deps));
   api.use(apiNotFound);
   api.use(problemHandler);
 

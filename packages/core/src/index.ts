@@ -17,3 +17,5 @@ export * from './board/schemas';
 export * from './board/state';
 export * from './tag-outs/schemas';
 export * from './live/link';
+export * from './reservations/ics';
+export * from './reservations/rules';

@@ -40,3 +40,5 @@ export function pgCode(error: unknown): string | undefined {
     : undefined;
 }
 export const UNIQUE_VIOLATION = '23505';
+/** An exclusion constraint refused the row: it overlaps one the constraint keeps apart. */
+export const EXCLUSION_VIOLATION = '23P01';

@@ -18,6 +18,9 @@ export const auditActions = [
   'shop.closure_removed',
   'machine.tagged_out',
   'machine.tag_out_cleared',
+  'reservation.created',
+  'reservation.cancelled',
+  'machine.reservation_rules_changed',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

@@ -37,6 +37,16 @@ describe('can()', () => {
     expect(can('admin', 'clear:tag-out:any')).toBe(true);
   });
 
+  it('lets everyone reserve and cancel their own reservations, and only an admin cancel anyone’s', () => {
+    for (const role of roles) {
+      expect(can(role, 'create:reservation:own'), role).toBe(true);
+      expect(can(role, 'cancel:reservation:own'), role).toBe(true);
+    }
+    expect(can('member', 'cancel:reservation:any')).toBe(false);
+    expect(can('instructor', 'cancel:reservation:any')).toBe(false);
+    expect(can('admin', 'cancel:reservation:any')).toBe(true);
+  });
+
   it('lets an admin do everything in the permission list', () => {
     for (const permission of permissions) {
       expect(can('admin', permission), permission).toBe(true);

@@ -46,6 +46,9 @@ export const permissions = [
   'create:tag-out:any',
   'clear:tag-out:own',
   'clear:tag-out:any',
+  'create:reservation:own',
+  'cancel:reservation:own',
+  'cancel:reservation:any',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -61,6 +64,8 @@ const memberPermissions: readonly Permission[] = [
   'accept:waiver:own',
   // Whoever finds a machine unsafe may take it out of service.
   'create:tag-out:any',
+  'create:reservation:own',
+  'cancel:reservation:own',
 ];
 
 /**

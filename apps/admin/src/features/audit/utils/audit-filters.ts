@@ -26,6 +26,9 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'shop.closure_removed': 'Closure removed',
   'machine.tagged_out': 'Machine tagged out',
   'machine.tag_out_cleared': 'Tag-out cleared',
+  'reservation.created': 'Reservation made',
+  'reservation.cancelled': 'Reservation cancelled',
+  'machine.reservation_rules_changed': 'Booking rules changed',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {
