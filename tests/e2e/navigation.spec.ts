@@ -2,9 +2,9 @@ import type { Role } from '@chuckkey/core';
 import { expect, test } from './fixtures';
 
 const linksByRole: Record<Role, string[]> = {
-  member: ['Shop floor', 'My record', 'Profile'],
-  instructor: ['Shop floor', 'My record', 'Profile', 'Teach'],
-  admin: ['Shop floor', 'My record', 'Profile', 'Teach', 'People', 'Setup', 'Outbox'],
+  member: ['Shop floor', 'Reserve', 'My record', 'Profile'],
+  instructor: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach'],
+  admin: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach', 'People', 'Setup', 'Outbox'],
 };
 
 const article = (role: Role) => (role === 'admin' || role === 'instructor' ? 'an' : 'a');

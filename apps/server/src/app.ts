@@ -12,6 +12,7 @@ import { healthRoutes } from './modules/health/health.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
 import { outboxRoutes } from './modules/outbox/outbox.routes';
+import { calendarFeedProfileRoutes, calendarFeedRoutes } from './modules/calendar-feed/calendar-feed.routes';
 import { profileRoutes } from './modules/profile/profile.routes';
 import { reservationsRoutes } from './modules/reservations/reservations.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
@@ -56,11 +57,14 @@ export function createApp(deps: Deps) {
   // A station is a device, not a person's sign-in: its routes neither read nor roll a web
   // session (each scan would otherwise cost a session read and write; docs/decisions/008).
   api.use('/station', stationRequestCheck, stationRoutes(deps));
+  // Calendar readers hold no sign-in: the feed's secret is its own key, so no session is read.
+  api.use('/calendar', calendarFeedRoutes(deps));
   api.use(sessions.middleware);
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(csrfProtection);
   api.use('/auth', authRoutes(deps, passport));
+  api.use('/profile/calendar-feed', calendarFeedProfileRoutes(deps));
   api.use('/profile', profileRoutes(deps));
   api.use('/members', membersRoutes(deps));
   api.use('/invitations', invitationsRoutes(deps));

@@ -19,3 +19,4 @@ export * from './tag-outs/schemas';
 export * from './live/link';
 export * from './reservations/ics';
 export * from './reservations/rules';
+export * from './reservations/check-in-window';

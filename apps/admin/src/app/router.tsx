@@ -28,6 +28,7 @@ export function createAppRouter() {
           lazy: page(() => import('./routes/app-layout')),
           children: [
             { index: true, lazy: page(() => import('./routes/shop-floor')) },
+            { path: paths.reserve.path, lazy: page(() => import('./routes/reserve')) },
             { path: paths.myRecord.path, lazy: page(() => import('./routes/my-record')) },
             { path: paths.profile.path, lazy: page(() => import('./routes/profile')) },
             { path: paths.teach.path, lazy: page(() => import('./routes/teach')) },
@@ -35,6 +36,7 @@ export function createAppRouter() {
             { path: paths.people.path, lazy: page(() => import('./routes/people')) },
             { path: paths.signOffReport.path, lazy: page(() => import('./routes/sign-off-report')) },
             { path: paths.auditLog.path, lazy: page(() => import('./routes/audit-log')) },
+            { path: paths.reservationsReport.path, lazy: page(() => import('./routes/reservations-report')) },
             { path: paths.setup.path, lazy: page(() => import('./routes/setup')) },
             { path: paths.setupMachines.path, lazy: page(() => import('./routes/setup-machines')) },
             { path: paths.setupMachineNew.path, lazy: page(() => import('./routes/setup-machine-edit')) },

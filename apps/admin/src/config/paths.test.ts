@@ -35,6 +35,8 @@ describe('paths with ids', () => {
   it('keeps an id in one segment of the address, whatever it holds', () => {
     expect(paths.memberRecord.getHref('a/b')).toBe('/teach/members/a%2Fb');
     expect(paths.setupMachine.getHref('5f0c')).toBe('/setup/machines/5f0c');
+    expect(paths.reserve.getHref('a/b')).toBe('/reserve?machine=a%2Fb');
+    expect(paths.reserve.getHref()).toBe('/reserve');
   });
 
   it('leaves the default view of the sign-off report out of its address', () => {

@@ -15,6 +15,7 @@ export const paths = {
     getHref: (token?: string) => withQuery('/accept-invitation', { token }),
   },
   profile: { path: '/profile', getHref: () => '/profile' },
+  reserve: { path: '/reserve', getHref: (machineId?: string) => withQuery('/reserve', { machine: machineId }) },
   myRecord: { path: '/my-record', getHref: () => '/my-record' },
   teach: { path: '/teach', getHref: () => '/teach' },
   memberRecord: {
@@ -28,6 +29,7 @@ export const paths = {
       withQuery('/people/sign-offs', { status: status === 'expired' ? status : undefined }),
   },
   auditLog: { path: '/people/audit-log', getHref: () => '/people/audit-log' },
+  reservationsReport: { path: '/people/reservations', getHref: () => '/people/reservations' },
   setup: { path: '/setup', getHref: () => '/setup' },
   setupMachines: { path: '/setup/machines', getHref: () => '/setup/machines' },
   setupMachineNew: { path: '/setup/machines/new', getHref: () => '/setup/machines/new' },

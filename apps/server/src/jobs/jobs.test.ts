@@ -5,7 +5,7 @@ import { createLogger } from '../lib/logger';
 import { createMailer, type Mailer } from '../lib/mailer';
 import { quietPublisher } from '../realtime/publisher';
 import { createTestContext, type TestContext } from '../test/harness';
-import { SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, SILENT_STATIONS, SILENT_STATIONS_CRON, startJobs } from './jobs';
+import { RESERVATION_CLOCK, RESERVATION_CLOCK_CRON, SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, SILENT_STATIONS, SILENT_STATIONS_CRON, startJobs } from './jobs';
 
 let ctx: TestContext;
 let mailer: Mailer;
@@ -36,6 +36,7 @@ describe('background jobs on pg-boss', () => {
       const schedules = await jobs.boss.getSchedules();
       expect(schedules).toContainEqual(expect.objectContaining({ name: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timezone: 'UTC' }));
       expect(schedules).toContainEqual(expect.objectContaining({ name: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }));
+      expect(schedules).toContainEqual(expect.objectContaining({ name: RESERVATION_CLOCK, cron: RESERVATION_CLOCK_CRON }));
 
       const id = await jobs.boss.send(SIGN_OFF_REMINDERS, {});
       expect(id).not.toBeNull();

@@ -1,6 +1,7 @@
 import PgBoss from 'pg-boss';
 import type { Deps } from '../lib/deps';
 import { machineSessionsService } from '../modules/machine-sessions/machine-sessions.service';
+import { reservationJobsService } from '../modules/reservations/reservation-jobs.service';
 import { shopRepository } from '../modules/shop/shop.repository';
 import { signOffRemindersService } from '../modules/sign-offs/reminders.service';
 
@@ -21,6 +22,16 @@ export const SILENT_STATIONS = 'silent-stations';
  * running and each silence is marked once, so a repeated run changes and announces nothing.
  */
 export const SILENT_STATIONS_CRON = '* * * * *';
+
+export const RESERVATION_CLOCK = 'reservation-clock';
+
+/**
+ * Every minute: reservations not checked into by the end of their grace become no-shows, machines
+ * whose check-in window opened or whose reservation ended are announced to the board, and
+ * reminders due within two hours go out. Both claim their rows in the database, so a repeated or
+ * concurrent run changes and sends nothing twice.
+ */
+export const RESERVATION_CLOCK_CRON = '* * * * *';
 
 export interface Jobs {
   boss: PgBoss;
@@ -52,7 +63,17 @@ export async function startJobs(deps: Deps, options: { schema?: string } = {}): 
     const closed = await sessions.closeSilentSessions(new Date());
     if (closed.length > 0) logger.info({ sessions: closed.map((s) => s.id) }, 'sessions of silent stations closed');
   });
+  const reservationClock = reservationJobsService(deps);
+  await boss.createQueue(RESERVATION_CLOCK);
+  await boss.schedule(RESERVATION_CLOCK, RESERVATION_CLOCK_CRON, {});
+  await boss.work(RESERVATION_CLOCK, async () => {
+    const now = new Date();
+    await reservationClock.releaseNoShows(now);
+    await reservationClock.announceTurns(now);
+    await reservationClock.sendReminders(now);
+  });
   logger.info({ queue: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }, 'background jobs started');
+  logger.info({ queue: RESERVATION_CLOCK, cron: RESERVATION_CLOCK_CRON }, 'background jobs started');
   logger.info({ queue: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timeZone }, 'background jobs started');
 
   return {

@@ -1,10 +1,18 @@
 import nodemailer from 'nodemailer';
 import type { Logger } from './logger';
 
+export interface MailAttachment {
+  filename: string;
+  /** The full MIME type with its parameters, e.g. `text/calendar; method=REQUEST; charset=UTF-8`. */
+  contentType: string;
+  content: string;
+}
+
 export interface Mail {
   to: string;
   subject: string;
   text: string;
+  attachments?: MailAttachment[];
 }
 
 export interface Mailer {

@@ -123,6 +123,19 @@ export async function caughtMail(db: Db, to: string, timeoutMs = 5_000): Promise
   }
 }
 
+/** The newest caught mail to an address with its text attachments. */
+export async function caughtMailWithAttachments(
+  db: Db,
+  to: string,
+  timeoutMs = 5_000,
+): Promise<{ subject: string; text: string; attachments: { filename: string | null; contentType: string; content: string }[] }> {
+  await caughtMail(db, to, timeoutMs);
+  return db('outbox_messages')
+    .first({ subject: 'subject', text: 'text_body', attachments: 'attachments' })
+    .whereRaw('? = any(to_addresses)', [to])
+    .orderBy('received_at', 'desc');
+}
+
 export async function countMail(db: Db, to: string): Promise<number> {
   const [row] = await db('outbox_messages').whereRaw('? = any(to_addresses)', [to]).count({ count: '*' });
   return Number(row?.count ?? 0);

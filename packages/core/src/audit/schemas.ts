@@ -20,6 +20,7 @@ export const auditActions = [
   'machine.tag_out_cleared',
   'reservation.created',
   'reservation.cancelled',
+  'reservation.no_show',
   'machine.reservation_rules_changed',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];

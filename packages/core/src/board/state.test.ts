@@ -7,6 +7,24 @@ const ago = (minutes: number) => new Date(NOW.getTime() - minutes * 60_000);
 const idle: MachineStateFacts = { tagOut: null, sessionRunning: false, stations: 1, lastHeardAt: ago(0.5) };
 
 describe('a machine on the board', () => {
+  const reservation = (startsInMinutes: number, minutes = 60, checkInMinutes = 10) => ({
+    startsAt: new Date(NOW.getTime() + startsInMinutes * 60_000),
+    endsAt: new Date(NOW.getTime() + (startsInMinutes + minutes) * 60_000),
+    checkInMinutes,
+  });
+
+  it('is reserved from the start of the check-in window until the reservation ends, not before', () => {
+    expect(machineBoardState({ ...idle, nextReservation: reservation(10) }, NOW)).toBe('reserved');
+    expect(machineBoardState({ ...idle, nextReservation: reservation(-30) }, NOW)).toBe('reserved');
+    expect(machineBoardState({ ...idle, nextReservation: reservation(11) }, NOW)).toBe('available');
+    expect(machineBoardState({ ...idle, nextReservation: reservation(-60) }, NOW)).toBe('available');
+  });
+
+  it('shows a tag-out or a running session over a reservation due now', () => {
+    expect(machineBoardState({ ...idle, sessionRunning: true, nextReservation: reservation(5) }, NOW)).toBe('in_use');
+    expect(machineBoardState({ ...idle, tagOut: { reason: 'Liner worn.' }, nextReservation: reservation(5) }, NOW)).toBe('tagged_out');
+  });
+
   it('is available when free and its station reports', () => {
     expect(machineBoardState(idle, NOW)).toBe('available');
   });

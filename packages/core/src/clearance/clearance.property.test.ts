@@ -32,7 +32,7 @@ function failingRules(f: ClearanceFacts, now: Date): number[] {
     4: f.machine.taggedOut !== null || f.machine.overdueBlockingTasks.length > 0,
     5: f.runningSession !== null && f.runningSession.memberId !== f.member.id,
     6: f.upcomingReservations.some(
-      (r) => r.memberId !== f.member.id && !r.released && r.startsAt.getTime() >= t && r.startsAt.getTime() <= t + protection,
+      (r) => r.memberId !== f.member.id && !r.released && (r.heldUntil ?? r.startsAt).getTime() >= t && r.startsAt.getTime() <= t + protection,
     ),
     7: !f.shopHours.open && !supervisorRole,
     8:
@@ -88,7 +88,12 @@ const anyScenarioArb = fc
     protectionMinutes: fc.option(fc.integer({ min: 0, max: 60 }), { nil: undefined }),
     session: fc.option(fc.record({ memberId: fc.constantFrom(SELF, OTHER), startedAt: offsetArb })),
     reservations: fc.array(
-      fc.record({ memberId: fc.constantFrom(SELF, OTHER), startsAt: offsetArb, released: fc.boolean() }),
+      fc.record({
+        memberId: fc.constantFrom(SELF, OTHER),
+        startsAt: offsetArb,
+        released: fc.boolean(),
+        heldFor: fc.option(fc.nat({ max: 120 * MINUTE }), { nil: undefined }),
+      }),
       { maxLength: 3 },
     ),
     open: fc.boolean(),
@@ -125,7 +130,11 @@ const anyScenarioArb = fc
         s.session === null
           ? null
           : { memberId: s.session.memberId, memberFirstName: 'Odile', startedAt: at(s.now, -Math.abs(s.session.startedAt)) },
-      upcomingReservations: s.reservations.map((r) => ({ ...r, startsAt: at(s.now, r.startsAt) })),
+      upcomingReservations: s.reservations.map(({ heldFor, ...r }) => ({
+        ...r,
+        startsAt: at(s.now, r.startsAt),
+        ...(heldFor === undefined ? {} : { heldUntil: at(s.now, r.startsAt + heldFor) }),
+      })),
       shopHours: { open: s.open, opensAt: at(s.now, 8 * 60 * MINUTE), closesAt: at(s.now, -60 * MINUTE) },
       policies: {
         overdueCheckoutBlockDays: s.blockDays,

@@ -288,7 +288,7 @@ describe('evaluateClearance()', () => {
   });
 
   describe('rule 6: reservations about to start', () => {
-    const reservation = (startsAt: Date, more: Partial<{ memberId: string; released: boolean }> = {}) => ({
+    const reservation = (startsAt: Date, more: Partial<{ memberId: string; released: boolean; heldUntil: Date }> = {}) => ({
       memberId: 'member-odile',
       released: false,
       startsAt,
@@ -329,6 +329,14 @@ describe('evaluateClearance()', () => {
       });
 
       expect(evaluateClearance(f, NOW).cleared).toBe(true);
+    });
+
+    // product.md: a reservation not checked into by its start plus the grace is released; until
+    // then, and through a checked-in reservation, the machine stays its holder's.
+    it('a reservation that has begun protects the machine until it is held, and not after', () => {
+      expect(codes(facts({ upcomingReservations: [reservation(minutes(-5), { heldUntil: minutes(10) })] }))).toEqual(['reservation_soon']);
+      expect(codes(facts({ upcomingReservations: [reservation(minutes(-5), { heldUntil: minutes(0) })] }))).toEqual(['reservation_soon']);
+      expect(evaluateClearance(facts({ upcomingReservations: [reservation(minutes(-5), { heldUntil: minutes(-1) })] }), NOW).cleared).toBe(true);
     });
   });
 

@@ -47,7 +47,12 @@ export interface ClearanceFacts {
   signOffs: ClearanceSignOff[];
   supervisorOnDuty: { firstName: string } | null;
   runningSession: { memberId: string; memberFirstName: string; startedAt: Date } | null;
-  upcomingReservations: { memberId: string; startsAt: Date; released: boolean }[];
+  /**
+   * `heldUntil`: a reservation that has begun goes on protecting the machine until then (the end of
+   * a checked-in one, the end of the no-show grace of one not checked in yet); without it, a
+   * reservation protects the machine only until it starts.
+   */
+  upcomingReservations: { memberId: string; startsAt: Date; released: boolean; heldUntil?: Date }[];
   /** As `shopHoursAt` in shop/hours.ts answers it; `closure` is the closure covering today, if one does. */
   shopHours: { open: boolean; opensAt?: Date | null; closesAt?: Date | null; closure?: { reason: string } | null };
   /** Both limits are off (null) unless the shop sets them. */
@@ -212,7 +217,7 @@ function reservations({ member, machine, upcomingReservations }: ClearanceFacts,
   const windowEnd = now.getTime() + (machine.protectionMinutes ?? DEFAULT_PROTECTION_MINUTES) * MINUTE;
   const soon = upcomingReservations
     .filter((r) => r.memberId !== member.id && !r.released)
-    .filter((r) => r.startsAt.getTime() >= now.getTime() && r.startsAt.getTime() <= windowEnd)
+    .filter((r) => (r.heldUntil ?? r.startsAt).getTime() >= now.getTime() && r.startsAt.getTime() <= windowEnd)
     .sort((a, b) => a.startsAt.getTime() - b.startsAt.getTime());
   const first = soon[0];
   if (!first) return [];

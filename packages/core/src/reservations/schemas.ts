@@ -151,3 +151,45 @@ export const machineReservationRulesSchema = z.object({
   rules: reservationRulesSchema,
 });
 export type MachineReservationRules = z.infer<typeof machineReservationRulesSchema>;
+
+/** POST /api/profile/calendar-feed: the private feed address, answered once. */
+export const calendarFeedCreatedSchema = z.object({ url: z.url() });
+export type CalendarFeedCreated = z.infer<typeof calendarFeedCreatedSchema>;
+
+/** GET /api/calendar/:token.ics: the feed's secret, as the server makes them (URL-safe base64). */
+export const calendarFeedParamsSchema = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, { error: 'Not a calendar feed address.' }),
+});
+
+export const RESERVATION_LIST_PAGE_SIZE = 50;
+
+/** GET /api/reservations and /api/reservations/export.csv (admins): every filter optional. */
+export const reservationListQuerySchema = z
+  .object({
+    from: instantSchema('from time').optional(),
+    to: instantSchema('to time').optional(),
+    machineId: z.uuid({ error: 'Choose a machine.' }).optional(),
+    status: reservationStatusSchema.optional(),
+    page: z.coerce.number().int().min(1).default(1),
+  })
+  .refine((value) => inOrder(value.from, value.to), { path: ['to'], error: 'The end of the range must come after its start.' });
+export type ReservationListQuery = z.output<typeof reservationListQuerySchema>;
+
+export const reservationListItemSchema = z.object({
+  id: z.uuid(),
+  machine: z.object({ id: z.uuid(), name: z.string() }),
+  member: z.object({ id: z.uuid(), firstName: z.string(), lastName: z.string() }),
+  start: z.string(),
+  end: z.string(),
+  status: reservationStatusSchema,
+  kind: z.enum(reservationKinds),
+});
+export type ReservationListItem = z.infer<typeof reservationListItemSchema>;
+
+export const reservationListSchema = z.object({
+  items: z.array(reservationListItemSchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+});
+export type ReservationList = z.infer<typeof reservationListSchema>;

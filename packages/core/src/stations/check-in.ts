@@ -24,6 +24,20 @@ export type RunningSession = z.infer<typeof runningSessionSchema>;
 
 export const unknownBadgeReasonSchema = z.object({ code: z.literal(UNKNOWN_BADGE), message: z.string(), nextStep: z.string() });
 
+/**
+ * The machine's next live reservation as a scan sees it: whether it is the scanning member's own,
+ * and whether they may check in for it now.
+ */
+export const scanReservationSchema = z.object({
+  id: z.uuid(),
+  startsAt: z.string(),
+  endsAt: z.string(),
+  own: z.boolean(),
+  memberFirstName: z.string(),
+  canCheckIn: z.boolean(),
+});
+export type ScanReservation = z.infer<typeof scanReservationSchema>;
+
 /** The decision after a scan at a machine station: who, whether they may start, and every reason why not. */
 export const stationScanResultSchema = z.object({
   // photoToken lets this station fetch the member's photo for a few minutes after the scan.
@@ -35,6 +49,8 @@ export const stationScanResultSchema = z.object({
   runningSession: runningSessionSchema.nullable(),
   requiresPin: z.boolean(),
   safetyChecklist: z.array(checklistItemSchema),
+  // Optional so that a station built before reservations still reads the answer.
+  nextReservation: scanReservationSchema.nullable().optional(),
 });
 export type StationScanResult = z.infer<typeof stationScanResultSchema>;
 
@@ -76,8 +92,16 @@ export const stationStateSchema = z.object({
   machine: z.object({ id: z.uuid(), name: z.string(), category: z.string(), requiresPin: z.boolean() }),
   runningSession: runningSessionSchema.omit({ own: true }).extend({ memberId: z.uuid() }).nullable(),
   supervisorOnDuty: z.object({ firstName: z.string() }).nullable(),
+  // memberId lets the running screen tell the running member's own reservation from someone else's.
+  nextReservation: z.object({ startsAt: z.string(), endsAt: z.string(), memberId: z.uuid(), memberFirstName: z.string() }).nullable().optional(),
 });
 export type StationState = z.infer<typeof stationStateSchema>;
+
+export const reservationCheckInSchema = z.object({ badge: badgeCodeSchema });
+export type ReservationCheckIn = z.infer<typeof reservationCheckInSchema>;
+
+export const reservationCheckedInSchema = z.object({ id: z.uuid(), status: z.literal('checked_in') });
+export type ReservationCheckedIn = z.infer<typeof reservationCheckedInSchema>;
 
 export const stationDutySchema = z.object({ badge: badgeCodeSchema, pin: pinField });
 

@@ -16,6 +16,7 @@ interface NavItem {
 // Only pages that exist are listed; the order follows the shop's own: the floor first, admin work last.
 const navItems: NavItem[] = [
   { label: 'Shop floor', to: paths.home.getHref(), end: true },
+  { label: 'Reserve', to: paths.reserve.getHref() },
   { label: 'My record', to: paths.myRecord.getHref() },
   { label: 'Profile', to: paths.profile.getHref() },
   { label: 'Teach', to: paths.teach.getHref(), permission: 'create:sign-off:any' },

@@ -6,9 +6,10 @@ const items: { label: string; to: string; end?: boolean; permission: Permission 
   { label: 'Members', to: paths.people.getHref(), end: true, permission: 'read:member:any' },
   { label: 'Sign-offs', to: paths.signOffReport.getHref(), permission: 'report:sign-off:any' },
   { label: 'Audit log', to: paths.auditLog.getHref(), permission: 'read:audit:any' },
+  { label: 'Reservations', to: paths.reservationsReport.getHref(), permission: 'manage:machine:any' },
 ];
 
-/** People holds the records about members: who they are, which sign-offs lapse, what changed. */
+/** People holds the records about members: who they are, which sign-offs lapse, what changed, what they reserved. */
 export function PeopleNav({ user }: { user: User }) {
   return <SectionNav label="People" items={items.filter((item) => can(user.role, item.permission))} />;
 }

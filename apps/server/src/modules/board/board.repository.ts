@@ -12,6 +12,8 @@ export interface MachineTileRow {
   /** Paired, unrevoked stations at the machine, and the latest contact of any of them. */
   stations: number;
   lastHeardAt: string | null;
+  /** The earliest active reservation that starts today or later (the shop's day) and has not ended. */
+  nextReservation: { startsAt: string; endsAt: string; checkInMinutes: number } | null;
 }
 
 export interface BoardRow {
@@ -24,7 +26,7 @@ export interface BoardRow {
 
 /*
  * Per machine: its open tag-out (at most one, by a unique index), its running session with the
- * member's name, and its paired, unrevoked stations (a revoked one has no device token). Written
+ * member's name, its next reservation not yet checked into, and its paired, unrevoked stations (a revoked one has no device token). Written
  * once and used by both statements below, so a tile and a `machine:update` never disagree.
  */
 const tileColumns = `
@@ -38,6 +40,14 @@ const tileColumns = `
     from machine_sessions s join members p on p.id = s.member_id
     where s.machine_id = m.id and s.ended_at is null
   ) as session,
+  (
+    select json_build_object('startsAt', r.starts_at, 'endsAt', r.ends_at, 'checkInMinutes', m.check_in_minutes)
+    from reservations r
+    where r.machine_id = m.id and r.status = 'active' and r.ends_at > now()
+      and r.starts_at >= (select date_trunc('day', now() at time zone time_zone) at time zone time_zone from shop where id = 1)
+    order by r.starts_at
+    limit 1
+  ) as "nextReservation",
   heard.stations, heard."lastHeardAt"`;
 
 const heardJoin = `
@@ -82,7 +92,7 @@ select
     cross join lateral (
       select json_agg(json_build_object(
         'id', t.id, 'name', t.name, 'category', t.category, 'tagOut', t."tagOut", 'session', t.session,
-        'stations', t.stations, 'lastHeardAt', t."lastHeardAt") order by t.name) as machines
+        'stations', t.stations, 'lastHeardAt', t."lastHeardAt", 'nextReservation', t."nextReservation") order by t.name) as machines
       from tiles t where t.area_id = a.id
     ) area
     where area.machines is not null

@@ -15,14 +15,24 @@ const iso = (value: string | null) => (value === null ? null : new Date(value).t
 
 function stateOf(row: MachineTileRow, now: Date): BoardState {
   return machineBoardState(
-    { tagOut: row.tagOut, sessionRunning: row.session !== null, stations: row.stations, lastHeardAt: row.lastHeardAt === null ? null : new Date(row.lastHeardAt) },
+    {
+      tagOut: row.tagOut,
+      sessionRunning: row.session !== null,
+      stations: row.stations,
+      lastHeardAt: row.lastHeardAt === null ? null : new Date(row.lastHeardAt),
+      nextReservation: row.nextReservation && {
+        startsAt: new Date(row.nextReservation.startsAt),
+        endsAt: new Date(row.nextReservation.endsAt),
+        checkInMinutes: row.nextReservation.checkInMinutes,
+      },
+    },
     now,
   );
 }
 
 /**
  * The board is public, so a tile names the member by first name and last initial and carries no
- * id, e-mail or badge. Reservations are not kept yet, so there is no next one to show.
+ * id, e-mail or badge; a reservation shows as its start alone, never whose it is.
  */
 function toTile(row: MachineTileRow, now: Date): BoardMachine {
   return {
@@ -32,7 +42,7 @@ function toTile(row: MachineTileRow, now: Date): BoardMachine {
     state: stateOf(row, now),
     member: row.session ? { firstName: row.session.firstName, lastInitial: lastInitial(row.session.lastName) } : null,
     startedAt: row.session ? iso(row.session.startedAt) : null,
-    nextReservationAt: null,
+    nextReservationAt: row.nextReservation ? iso(row.nextReservation.startsAt) : null,
     tagOut: row.tagOut ? { reason: row.tagOut.reason, since: new Date(row.tagOut.since).toISOString() } : null,
   };
 }

@@ -104,6 +104,29 @@ describe('GET /api/board: what it shows', () => {
     expect(board.classes).toEqual([]);
   });
 
+  it('shows the next reservation’s start, and the machine reserved from its check-in window until it is checked into, never whose it is', async () => {
+    const machine = await createMachine(ctx.db, { reservable: true });
+    await ctx.db('machines').where({ id: machine.id }).update({ check_in_minutes: 10 });
+    const member = await createMember(ctx.db, { first_name: 'Talia', last_name: 'Greaves' });
+    const minutes = (n: number) => new Date(Date.now() + n * 60_000);
+    const reserve = async (startIn: number, endIn: number, status = 'active') =>
+      (await ctx.db('reservations')
+        .insert({ machine_id: machine.id, member_id: member.id, starts_at: minutes(startIn), ends_at: minutes(endIn), blocked_until: minutes(endIn), status })
+        .returning(['id', 'starts_at']))[0] as { id: string; starts_at: Date };
+
+    const later = await reserve(60, 120);
+    let shown = tile(await boardAsMember(), machine.id);
+    expect(shown).toMatchObject({ state: 'available', nextReservationAt: later.starts_at.toISOString() });
+
+    const soon = await reserve(5, 30);
+    shown = tile(await boardAsMember(), machine.id);
+    expect(shown).toMatchObject({ state: 'reserved', member: null, nextReservationAt: soon.starts_at.toISOString() });
+    expect(JSON.stringify(shown)).not.toContain('Talia');
+
+    await ctx.db('reservations').where({ id: soon.id }).update({ status: 'no_show' });
+    expect(tile(await boardAsMember(), machine.id)).toMatchObject({ state: 'available', nextReservationAt: later.starts_at.toISOString() });
+  });
+
   it('shows a running session as in use, with the member’s first name and last initial and the start', async () => {
     const machine = await createMachine(ctx.db);
     const member = await createMember(ctx.db, { first_name: 'Ines', last_name: 'Marrow' });

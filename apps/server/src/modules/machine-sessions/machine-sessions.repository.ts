@@ -9,7 +9,15 @@ export type EndedBy = 'member' | 'supervisor' | 'admin' | 'heartbeat' | 'next_me
 export interface ScanFacts {
   /** The shop's IANA time zone, for the times in the messages. */
   timeZone: string;
-  machine: { id: string; name: string; category: MachineCategory; requiresPin: boolean; safetyChecklist: ChecklistItem[] };
+  machine: {
+    id: string;
+    name: string;
+    category: MachineCategory;
+    requiresPin: boolean;
+    safetyChecklist: ChecklistItem[];
+    checkInMinutes: number;
+    noShowGraceMinutes: number;
+  };
   /** The machine's open tag-out (rule 4). */
   taggedOut: { reason: string; since: Date } | null;
   member: { id: string; firstName: string; role: Role; active: boolean; waiverOnFile: boolean; hasPhoto: boolean } | null;
@@ -21,6 +29,20 @@ export interface ScanFacts {
   weeklyHours: WeeklyHours[];
   /** Closures around today, 'YYYY-MM-DD' in the shop's calendar. */
   closures: ClosureDays[];
+  /**
+   * The machine's live reservations (active or checked in) that overlap from `now` minus the
+   * machine's no-show grace to `now` plus its check-in window, earliest first (rule 6, check-in).
+   */
+  reservations: ScanReservation[];
+}
+
+export interface ScanReservation {
+  id: string;
+  memberId: string;
+  memberFirstName: string;
+  startsAt: Date;
+  endsAt: Date;
+  status: 'active' | 'checked_in';
 }
 
 export interface SessionRecord {
@@ -51,13 +73,14 @@ export const TEACHERS_NAMED = 3;
  * current waiver version, the machine's active required trainings with the first names of up to
  * three instructors who signed each off lately, the member's sign-offs for those trainings in any
  * state, a supervisor on duty, the machine's running session and open tag-out (rule 4), and the
- * shop's weekly hours and the closures around today (rule 7). With no badge hash (null) the member parts come back empty. The
+ * shop's weekly hours and the closures around today (rule 7), and the machine's live reservations
+ * near $5, the scan's instant (rule 6 and check-in). With no badge hash (null) the member parts come back empty. The
  * shop's time zone comes along for the wording of times and for deciding whether the shop is open.
  *
  * Two forms: by machine id, and by a station's device token hash, which also answers the station
  * (so a scan is a single round trip: credential, machine and member at once). Parameters are $1
  * (machine id or device token hash), $2 (badge code hash), $3 (months a teacher counts as
- * recent) and $4 (teachers named). Both run as prepared statements: planning this text costs
+ * recent), $4 (teachers named) and $5 (now). Both run as prepared statements: planning this text costs
  * more than running it.
  */
 function factsSql(by: 'machine' | 'station'): string {
@@ -73,7 +96,8 @@ function factsSql(by: 'machine' | 'station'): string {
   const machineId = by === 'station' ? '(select "machineId" from station)' : '$1::uuid';
   return `
 with ${station}machine as (
-  select m.id, m.name, m.category, m.requires_pin as "requiresPin", m.safety_checklist as "safetyChecklist"
+  select m.id, m.name, m.category, m.requires_pin as "requiresPin", m.safety_checklist as "safetyChecklist",
+    m.check_in_minutes as "checkInMinutes", m.no_show_grace_minutes as "noShowGraceMinutes"
   from machines m where m.id = ${machineId}
 ),
 holder as (
@@ -145,7 +169,22 @@ select
     select coalesce(json_agg(json_build_object('startsOn', c.starts_on, 'endsOn', c.ends_on, 'reason', c.reason)), '[]')
     from shop_closures c
     where c.ends_on >= current_date - 1 and c.starts_on <= current_date + ${CLOSURE_DAYS_AHEAD}
-  ) as "closures"
+  ) as "closures",
+  (
+    -- The range test is the one the exclusion constraint's GiST index serves (machine, range), so
+    -- this stays a probe of a few rows however many reservations the machine has had.
+    select coalesce(json_agg(json_build_object(
+      'id', r.id, 'memberId', r.member_id, 'memberFirstName', p.first_name,
+      'startsAt', r.starts_at, 'endsAt', r.ends_at, 'status', r.status) order by r.starts_at), '[]')
+    from machine mm
+    join reservations r on r.machine_id = mm.id
+    join members p on p.id = r.member_id
+    where r.status in ('active', 'checked_in')
+      and tstzrange(r.starts_at, r.blocked_until) && tstzrange(
+        $5::timestamptz - make_interval(mins => mm."noShowGraceMinutes"),
+        $5::timestamptz + make_interval(mins => mm."checkInMinutes"), '[]')
+      and r.ends_at > $5::timestamptz - make_interval(mins => mm."noShowGraceMinutes")
+  ) as "reservations"
 `;
 }
 
@@ -163,6 +202,7 @@ interface FactsRow {
   taggedOut: { reason: string; since: string } | null;
   weeklyHours: WeeklyHours[];
   closures: ClosureDays[];
+  reservations: (Omit<ScanReservation, 'startsAt' | 'endsAt'> & { startsAt: string; endsAt: string })[];
 }
 
 interface StationJson {
@@ -178,7 +218,7 @@ interface StationJson {
 
 const date = (value: string | null) => (value === null ? null : new Date(value));
 
-const factsValues = (key: string, codeHash: string | null) => [key, codeHash, TEACHER_RECENT_MONTHS, TEACHERS_NAMED];
+const factsValues = (key: string, codeHash: string | null, now: Date) => [key, codeHash, TEACHER_RECENT_MONTHS, TEACHERS_NAMED, now];
 
 function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
   return {
@@ -192,6 +232,7 @@ function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
     runningSession: row.runningSession ? { ...row.runningSession, startedAt: new Date(row.runningSession.startedAt) } : null,
     weeklyHours: row.weeklyHours,
     closures: row.closures,
+    reservations: row.reservations.map((r) => ({ ...r, startsAt: new Date(r.startsAt), endsAt: new Date(r.endsAt) })),
   };
 }
 
@@ -217,8 +258,8 @@ function toSession(row: Record<string, unknown>): SessionRecord {
 /** Pass a transaction as `db` to make several calls one change. */
 export function machineSessionsRepository(db: Db) {
   return {
-    async facts(machineId: string, codeHash: string | null): Promise<ScanFacts | undefined> {
-      const [row] = await preparedRows<FactsRow>(db, 'scan_facts_by_machine', FACTS_BY_MACHINE_SQL, factsValues(machineId, codeHash));
+    async facts(machineId: string, codeHash: string | null, now: Date): Promise<ScanFacts | undefined> {
+      const [row] = await preparedRows<FactsRow>(db, 'scan_facts_by_machine', FACTS_BY_MACHINE_SQL, factsValues(machineId, codeHash, now));
       return row?.machine ? toFacts(row, row.machine) : undefined;
     },
 
@@ -226,12 +267,12 @@ export function machineSessionsRepository(db: Db) {
      * The paired, unrevoked station holding the device token hash and, when it is at a machine
      * that exists, the scan's facts; one round trip.
      */
-    async stationFacts(deviceTokenHash: string, codeHash: string | null): Promise<{ station: StationRecord; facts: ScanFacts | null } | undefined> {
+    async stationFacts(deviceTokenHash: string, codeHash: string | null, now: Date): Promise<{ station: StationRecord; facts: ScanFacts | null } | undefined> {
       const [row] = await preparedRows<FactsRow & { station: StationJson | null }>(
         db,
         'scan_facts_by_station',
         FACTS_BY_STATION_SQL,
-        factsValues(deviceTokenHash, codeHash),
+        factsValues(deviceTokenHash, codeHash, now),
       );
       if (!row?.station) return undefined;
       const { station: s, machine } = row;
@@ -249,6 +290,25 @@ export function machineSessionsRepository(db: Db) {
         pairingExpiresAt: date(s.pairingExpiresAt),
       };
       return { station, facts: machine ? toFacts(row, machine) : null };
+    },
+
+    /** The machine's earliest live reservation not over at `now`, however far ahead it starts. */
+    async nextReservation(machineId: string, now: Date): Promise<ScanReservation | undefined> {
+      const row = (await db('reservations as r')
+        .join('members as p', 'p.id', 'r.member_id')
+        .first({
+          id: 'r.id',
+          memberId: 'r.member_id',
+          memberFirstName: 'p.first_name',
+          startsAt: 'r.starts_at',
+          endsAt: 'r.ends_at',
+          status: 'r.status',
+        })
+        .where('r.machine_id', machineId)
+        .whereIn('r.status', ['active', 'checked_in'])
+        .where('r.ends_at', '>', now)
+        .orderBy('r.starts_at')) as ScanReservation | undefined;
+      return row;
     },
 
     /** Fails with a unique violation when the machine already has a running session. */

@@ -1,4 +1,4 @@
-import { simpleParser, type AddressObject } from 'mailparser';
+import { simpleParser, type AddressObject, type HeaderValue } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Db } from '../../lib/db';
 import type { Logger } from '../../lib/logger';
@@ -7,6 +7,12 @@ import { outboxRepository } from './outbox.repository';
 function addresses(field: AddressObject | AddressObject[] | undefined): string[] {
   const list = Array.isArray(field) ? field : field ? [field] : [];
   return list.flatMap((a) => a.value.map((v) => v.address ?? '')).filter(Boolean);
+}
+
+/** The attachment's type with its parameters (`method=REQUEST`), which mailparser keeps apart. */
+function fullContentType(type: string, header: HeaderValue | undefined): string {
+  const params = header && typeof header === 'object' && 'params' in header ? Object.entries(header.params) : [];
+  return [type, ...params.map(([name, value]) => `${name}=${value}`)].join('; ');
 }
 
 const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;
@@ -34,6 +40,11 @@ export async function startMailCatcher({ db, logger, port, host = '127.0.0.1' }:
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : null,
+            attachments: parsed.attachments.filter((a) => a.contentType.startsWith('text/')).map((a) => ({
+              filename: a.filename ?? null,
+              contentType: fullContentType(a.contentType, a.headers.get('content-type')),
+              content: a.content.toString('utf8'),
+            })),
           });
           logger.info({ to: envelopeTo, subject: parsed.subject }, 'mail caught');
           callback();

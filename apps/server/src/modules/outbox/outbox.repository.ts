@@ -8,6 +8,13 @@ export interface CaughtMail {
   subject: string;
   text: string;
   html: string | null;
+  attachments: CaughtAttachment[];
+}
+
+export interface CaughtAttachment {
+  filename: string | null;
+  contentType: string;
+  content: string;
 }
 
 export function outboxRepository(db: Db) {
@@ -20,6 +27,7 @@ export function outboxRepository(db: Db) {
         subject: mail.subject,
         text_body: mail.text,
         html_body: mail.html,
+        attachments: JSON.stringify(mail.attachments),
       });
     },
 

@@ -1,4 +1,5 @@
 import type { ClearanceSignOff, ReservationKind, ReservationRules, ReservationRulesInput, ReservationStatus } from '@chuckkey/core';
+import type { Knex } from 'knex';
 import type { Db } from '../../lib/db';
 
 export interface ReservationRecord {
@@ -13,6 +14,33 @@ export interface ReservationRecord {
   createdAt: Date;
   cancelledAt: Date | null;
   checkedInAt: Date | null;
+}
+
+export interface ReservationMailRecord extends ReservationRecord {
+  machineName: string;
+  memberEmail: string;
+  memberFirstName: string;
+  memberLastName: string;
+}
+
+export interface ReservationListFilters {
+  from?: Date;
+  to?: Date;
+  machineId?: string;
+  status?: ReservationStatus;
+}
+
+export interface ReservationListRecord {
+  id: string;
+  machineId: string;
+  machineName: string;
+  memberId: string;
+  memberFirstName: string;
+  memberLastName: string;
+  startsAt: Date;
+  endsAt: Date;
+  status: ReservationStatus;
+  kind: ReservationKind;
 }
 
 export interface MachineBookingRecord {
@@ -53,6 +81,15 @@ const ruleColumns = {
 
 /** Claims that hold the machine: the exclusion constraint judges only these. */
 const LIVE = ['active', 'checked_in'] as const;
+
+/** Narrows a query over `reservations as r`; a time range keeps the reservations that overlap it. */
+function filtered(query: Knex.QueryBuilder, filters: ReservationListFilters): Knex.QueryBuilder {
+  if (filters.from) query.where('r.ends_at', '>', filters.from);
+  if (filters.to) query.where('r.starts_at', '<', filters.to);
+  if (filters.machineId) query.where('r.machine_id', filters.machineId);
+  if (filters.status) query.where('r.status', filters.status);
+  return query;
+}
 
 /** Pass a transaction as `db` to make several calls one change. */
 export function reservationsRepository(db: Db) {
@@ -157,6 +194,104 @@ export function reservationsRepository(db: Db) {
         .orderBy('r.starts_at', 'desc')
         .limit(limit)
         .select({ ...Object.fromEntries(Object.entries(columns).map(([alias, column]) => [alias, `r.${column}`])), machineName: 'm.name' });
+    },
+
+    /**
+     * Marks every member's reservation not checked into by its start plus the machine's no-show
+     * grace as a no-show, in one statement: the time is free again, and a repeated run finds nothing.
+     */
+    async releaseNoShows(now: Date): Promise<{ id: string; machineId: string; memberId: string }[]> {
+      return db('reservations as r')
+        .update({ status: 'no_show' })
+        .updateFrom('machines as m')
+        .whereRaw('m.id = r.machine_id')
+        .where({ 'r.status': 'active', 'r.kind': 'member' })
+        .whereRaw("r.starts_at + make_interval(mins => m.no_show_grace_minutes) <= ?", [now])
+        .returning(['r.id as id', 'r.machine_id as machineId', 'r.member_id as memberId']);
+    },
+
+    /** Machines where an active reservation's check-in window opened, or the reservation ended, in (after, until]. */
+    async machinesTurning(after: Date, until: Date): Promise<string[]> {
+      const rows: { machineId: string }[] = await db('reservations as r')
+        .join('machines as m', 'm.id', 'r.machine_id')
+        .where('r.status', 'active')
+        .where((turn) => {
+          turn
+            .where((opening) => {
+              opening.whereRaw('r.starts_at - make_interval(mins => m.check_in_minutes) > ?', [after]).whereRaw('r.starts_at - make_interval(mins => m.check_in_minutes) <= ?', [until]);
+            })
+            .orWhere((ending) => {
+              ending.where('r.ends_at', '>', after).where('r.ends_at', '<=', until);
+            });
+        })
+        .distinct({ machineId: 'r.machine_id' });
+      return rows.map((row) => row.machineId);
+    },
+
+    /** Members' active reservations starting within `lead` of now that have had no reminder, booked before that lead began. */
+    async dueReminders(now: Date, leadMs: number): Promise<string[]> {
+      const until = new Date(now.getTime() + leadMs);
+      const rows: { id: string }[] = await db('reservations')
+        .where({ status: 'active', kind: 'member' })
+        .whereNull('reminded_at')
+        .where('starts_at', '>', now)
+        .where('starts_at', '<=', until)
+        .whereRaw('created_at < starts_at - ?::interval', [`${leadMs / 1000} seconds`])
+        .orderBy('starts_at')
+        .select('id');
+      return rows.map((row) => row.id);
+    },
+
+    /** Claims the reminder; false when another run took it first or the reservation is no longer active. */
+    async claimReminder(id: string, now: Date): Promise<boolean> {
+      const claimed = await db('reservations').where({ id, status: 'active' }).whereNull('reminded_at').update({ reminded_at: now });
+      return claimed === 1;
+    },
+
+    /** All reservations matching the filters (a time range keeps those overlapping it), earliest start first, with the total. */
+    async list(filters: ReservationListFilters, page: { limit: number; offset: number }): Promise<{ items: ReservationListRecord[]; total: number }> {
+      const query = filtered(db('reservations as r').join('machines as m', 'm.id', 'r.machine_id').join('members as p', 'p.id', 'r.member_id'), filters);
+      const rows: (ReservationListRecord & { total: string | number })[] = await query
+        .orderBy([{ column: 'r.starts_at' }, { column: 'r.id' }])
+        .limit(page.limit)
+        .offset(page.offset)
+        .select({
+          id: 'r.id',
+          machineId: 'r.machine_id',
+          machineName: 'm.name',
+          memberId: 'r.member_id',
+          memberFirstName: 'p.first_name',
+          memberLastName: 'p.last_name',
+          startsAt: 'r.starts_at',
+          endsAt: 'r.ends_at',
+          status: 'r.status',
+          kind: 'r.kind',
+          total: db.raw('count(*) over ()'),
+        });
+      // Past the last page no row carries the total, so it is counted on its own.
+      const total = rows[0]?.total ?? (page.offset > 0 ? await this.count(filters) : 0);
+      return { items: rows.map(({ total: _total, ...row }) => row), total: Number(total) };
+    },
+
+    async count(filters: ReservationListFilters): Promise<number> {
+      const query = filtered(db('reservations as r'), filters);
+      const [row] = await query.count({ n: '*' });
+      return Number(row?.n ?? 0);
+    },
+
+    /** The reservation with what its mails name: the machine and the member who holds it. */
+    async forMail(id: string): Promise<ReservationMailRecord | undefined> {
+      return db('reservations as r')
+        .join('machines as m', 'm.id', 'r.machine_id')
+        .join('members as p', 'p.id', 'r.member_id')
+        .where('r.id', id)
+        .first<ReservationMailRecord | undefined>({
+          ...Object.fromEntries(Object.entries(columns).map(([alias, column]) => [alias, `r.${column}`])),
+          machineName: 'm.name',
+          memberEmail: 'p.email',
+          memberFirstName: 'p.first_name',
+          memberLastName: 'p.last_name',
+        });
     },
 
     /** Live claims on the machine whose time with its buffer touches [from, to), earliest first. */

@@ -1,5 +1,11 @@
 import { Router } from 'express';
-import { availabilityQuerySchema, idParamsSchema, reservationCreateSchema, reservationRulesInputSchema } from '@chuckkey/core';
+import {
+  availabilityQuerySchema,
+  idParamsSchema,
+  reservationCreateSchema,
+  reservationListQuerySchema,
+  reservationRulesInputSchema,
+} from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
 import { parse } from '../../lib/validate';
 import { currentUser, requirePermission, requireUser } from '../../middleware/auth';
@@ -13,6 +19,16 @@ export function reservationsRoutes(deps: Deps): Router {
   router.post('/reservations', requirePermission('create:reservation:own'), async (req, res) => {
     const input = parse(reservationCreateSchema, req.body, 'body');
     res.status(201).json(await service.create(currentUser(req), input));
+  });
+
+  router.get('/reservations', requirePermission('manage:machine:any'), async (req, res) => {
+    const query = parse(reservationListQuerySchema, req.query, 'query');
+    res.set('Cache-Control', 'no-store').json(await service.list(query));
+  });
+
+  router.get('/reservations/export.csv', requirePermission('manage:machine:any'), async (req, res) => {
+    const query = parse(reservationListQuerySchema, req.query, 'query');
+    res.set('Cache-Control', 'no-store').type('text/csv; charset=utf-8').attachment('reservations.csv').send(await service.exportCsv(query));
   });
 
   router.get('/reservations/mine', requireUser, async (req, res) => {

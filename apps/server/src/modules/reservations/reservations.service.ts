@@ -2,6 +2,8 @@ import {
   can,
   quotaWeeks,
   reservationRefusal,
+  RESERVATION_LIST_PAGE_SIZE,
+  toCsv,
   type Availability,
   type AvailabilityQuery,
   type MyReservation,
@@ -9,21 +11,37 @@ import {
   type Reservation,
   type MachineReservationRules,
   type ReservationCreate,
+  type ReservationList,
+  type ReservationListItem,
+  type ReservationListQuery,
   type ReservationRulesInput,
 } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
 import { conflict, EXCLUSION_VIOLATION, notFound, pgCode } from '../../lib/errors';
 import { auditLog } from '../audit/audit.repository';
 import { shopRepository } from '../shop/shop.repository';
-import { reservationsRepository, type ReservationRecord } from './reservations.repository';
+import { reservationMail } from './reservation-mail';
+import { reservationsRepository, type ReservationListRecord, type ReservationRecord } from './reservations.repository';
 
 const MINUTE = 60_000;
 const DAY = 86_400_000;
+/** The most rows one CSV export holds. */
+const CSV_EXPORT_LIMIT = 100_000;
 /** How many of a member's reservations their own list shows. */
 const MINE_LIMIT = 200;
 
 const machineNotFound = () => notFound('machine_not_found', 'There is no machine with that id.');
 const reservationNotFound = () => notFound('reservation_not_found', 'There is no reservation of yours with that id.');
+
+const toListItem = (row: ReservationListRecord): ReservationListItem => ({
+  id: row.id,
+  machine: { id: row.machineId, name: row.machineName },
+  member: { id: row.memberId, firstName: row.memberFirstName, lastName: row.memberLastName },
+  start: row.startsAt.toISOString(),
+  end: row.endsAt.toISOString(),
+  status: row.status,
+  kind: row.kind,
+});
 
 const toReservation = (row: ReservationRecord): Reservation => ({
   id: row.id,
@@ -37,7 +55,9 @@ const toReservation = (row: ReservationRecord): Reservation => ({
  * Reservations of machine time. The rules in core judge each request; the database's exclusion
  * constraint alone decides an overlap, so two requests racing for one slot cannot both land.
  */
-export function reservationsService({ db }: Deps) {
+export function reservationsService(deps: Deps) {
+  const { db, live } = deps;
+  const mail = reservationMail(deps);
   return {
     async create(actor: Express.User, input: ReservationCreate, now = new Date()): Promise<Reservation> {
       const created = await db.transaction(async (trx) => {
@@ -98,12 +118,14 @@ export function reservationsService({ db }: Deps) {
         });
         return row;
       });
+      live.machineChanged(created.machineId);
+      await mail.send('confirmation', created.id, now);
       return toReservation(created);
     },
 
     /** A member cancels their own live reservation before it ends; an admin may cancel anyone's. */
     async cancel(actor: Express.User, id: string, now = new Date()): Promise<void> {
-      await db.transaction(async (trx) => {
+      const cancelled = await db.transaction(async (trx) => {
         const repository = reservationsRepository(trx);
         const row = await repository.findForUpdate(id);
         const mayCancel = row && (can(actor.role, 'cancel:reservation:any') || (row.memberId === actor.id && can(actor.role, 'cancel:reservation:own')));
@@ -121,7 +143,10 @@ export function reservationsService({ db }: Deps) {
           memberId: row.memberId,
           details: { machineId: row.machineId, start: row.startsAt.toISOString(), end: row.endsAt.toISOString() },
         });
+        return row;
       });
+      live.machineChanged(cancelled.machineId);
+      await mail.send('cancellation', cancelled.id, now);
     },
 
     /** Upcoming: live claims not yet over, soonest first. Past: everything else, latest first. */
@@ -156,6 +181,29 @@ export function reservationsService({ db }: Deps) {
         });
         return { machineId, reservable: after.reservable, rules: after.rules };
       });
+    },
+
+    /** Admins' list of everyone's reservations, a page at a time. */
+    async list(query: ReservationListQuery): Promise<ReservationList> {
+      const { items, total } = await reservationsRepository(db).list(query, { limit: RESERVATION_LIST_PAGE_SIZE, offset: (query.page - 1) * RESERVATION_LIST_PAGE_SIZE });
+      return { items: items.map(toListItem), total, page: query.page, pageSize: RESERVATION_LIST_PAGE_SIZE };
+    },
+
+    /** The same filters as the list, every match in one RFC 4180 file. */
+    async exportCsv(query: ReservationListQuery): Promise<string> {
+      const { items } = await reservationsRepository(db).list(query, { limit: CSV_EXPORT_LIMIT, offset: 0 });
+      return toCsv(items.map(toListItem), [
+        { header: 'Start', value: (r: ReservationListItem) => r.start },
+        { header: 'End', value: (r) => r.end },
+        { header: 'Machine', value: (r) => r.machine.name },
+        { header: 'First name', value: (r) => r.member.firstName },
+        { header: 'Last name', value: (r) => r.member.lastName },
+        { header: 'Status', value: (r) => r.status },
+        { header: 'Kind', value: (r) => r.kind },
+        { header: 'Reservation id', value: (r) => r.id },
+        { header: 'Machine id', value: (r) => r.machine.id },
+        { header: 'Member id', value: (r) => r.member.id },
+      ]);
     },
 
     /** The machine's taken time in a range, naming no one, and the rules a request must meet. */

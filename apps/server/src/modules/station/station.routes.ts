@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import {
   pairSchema,
+  reservationCheckInSchema,
   sessionEndSchema,
   sessionStartSchema,
   stationDutySchema,
@@ -18,6 +19,7 @@ import { parse, ValidationError, zodFieldErrors } from '../../lib/validate';
 import { currentStation, deviceKey, requireStation, setStationCookie, stationFromRequest } from '../../middleware/station-auth';
 import { badgesService } from '../badges/badges.service';
 import { machineNotFound, machineSessionsService, notAMachineStation, stationPhotoAllowed } from '../machine-sessions/machine-sessions.service';
+import { reservationCheckInService } from './reservation-check-in.service';
 import { stationService } from './station.service';
 
 /**
@@ -27,6 +29,7 @@ import { stationService } from './station.service';
 export const SCANS_PER_MINUTE = 60;
 
 const sessionParams = z.object({ id: z.uuid({ error: 'Not a session id.' }) });
+const reservationParams = z.object({ id: z.uuid({ error: 'Not a reservation id.' }) });
 
 /**
  * What a paired device may do. These routes run without the web session (a station is no
@@ -121,7 +124,7 @@ export function stationRoutes(deps: Deps): Router {
   });
 
   router.get('/state', async (req, res) => {
-    res.json(await sessions.state(currentStation(req)));
+    res.json(await sessions.state(currentStation(req), new Date()));
   });
 
   router.post('/sessions', async (req, res) => {
@@ -133,6 +136,13 @@ export function stationRoutes(deps: Deps): Router {
     const { id } = parse(sessionParams, req.params, 'params');
     const input = parse(sessionEndSchema, req.body, 'body');
     res.json(await sessions.end(currentStation(req), id, input, new Date()));
+  });
+
+  const checkIns = reservationCheckInService(deps);
+  router.post('/reservations/:id/check-in', async (req, res) => {
+    const { id } = parse(reservationParams, req.params, 'params');
+    const { badge } = parse(reservationCheckInSchema, req.body, 'body');
+    res.json(await checkIns.checkIn(currentStation(req), id, badge, new Date()));
   });
 
   router.post('/duty', async (req, res) => {

@@ -28,6 +28,7 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'machine.tag_out_cleared': 'Tag-out cleared',
   'reservation.created': 'Reservation made',
   'reservation.cancelled': 'Reservation cancelled',
+  'reservation.no_show': 'Reservation released as a no-show',
   'machine.reservation_rules_changed': 'Booking rules changed',
 };
 

@@ -12,6 +12,7 @@ export const OUTCOME_IDLE_MS = 20_000;
 export function DecisionScreen({
   answer,
   changed = false,
+  checkIn,
   onContinue,
   onEndOwn,
   onDone,
@@ -19,6 +20,8 @@ export function DecisionScreen({
   answer: StationScanResult;
   /** Shown again because the server refused to start after the safety check. */
   changed?: boolean;
+  /** Offered when the member may check in for their reservation now; `done` once they have. */
+  checkIn?: { onCheckIn: () => void; busy: boolean; done: boolean; message: string | null };
   onContinue: () => void;
   onEndOwn: () => void;
   onDone: () => void;
@@ -74,6 +77,19 @@ export function DecisionScreen({
         </p>
       ) : null}
 
+      {checkIn?.done ? (
+        <p role="status" className="flex items-center gap-4 rounded-xl border-4 border-state-reserved px-6 py-3 text-kiosk-lead font-bold text-balance">
+          <Icon name="check" className="size-12 text-state-reserved" />
+          <span>You are checked in for your reservation. The machine is held for you.</span>
+        </p>
+      ) : null}
+      {checkIn?.message ? (
+        <p role="alert" className="flex items-center gap-4 rounded-xl border-4 border-link-down px-6 py-3 text-kiosk-lead text-balance">
+          <Icon name="warning" className="size-12 text-link-down" />
+          <span>{checkIn.message}</span>
+        </p>
+      ) : null}
+
       {running && !running.own ? (
         <p className="flex items-center gap-4 rounded-xl border-4 border-link-down px-6 py-3 text-kiosk-lead text-balance">
           <Icon name="chuck" className="size-12" />
@@ -88,6 +104,11 @@ export function DecisionScreen({
         {running?.own ? (
           <Button onClick={onEndOwn} className="min-h-24">
             End session
+          </Button>
+        ) : null}
+        {answer.nextReservation?.canCheckIn && checkIn && !checkIn.done ? (
+          <Button onClick={checkIn.onCheckIn} disabled={checkIn.busy} className="min-h-24 px-14">
+            Check in for your reservation
           </Button>
         ) : null}
         {answer.cleared && !running ? (

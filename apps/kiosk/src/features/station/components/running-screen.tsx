@@ -14,6 +14,7 @@ export function RunningScreen({
   onBadge,
   scanning,
   message,
+  warning,
 }: {
   firstName: string;
   startedAt: string;
@@ -22,6 +23,8 @@ export function RunningScreen({
   onBadge: (code: string) => void;
   scanning: boolean;
   message: ReactNode;
+  /** Someone else's reservation is near: the session runs on, and the member is asked to finish. */
+  warning: string | null;
 }) {
   const now = useNow();
   const [confirming, setConfirming] = useState(false);
@@ -29,6 +32,12 @@ export function RunningScreen({
 
   return (
     <div className="flex w-full max-w-5xl flex-col items-center gap-6 text-center">
+      {warning ? (
+        <p role="alert" className="flex w-full items-center justify-center gap-4 rounded-xl bg-state-reserved px-6 py-4 text-kiosk-lead font-bold text-white text-balance">
+          <Icon name="hourglass" className="size-12 shrink-0" />
+          <span>{warning}</span>
+        </p>
+      ) : null}
       <p className="flex items-center gap-4 text-kiosk-lead font-bold">
         <Icon name="chuck" className="size-12" />
         {firstName} is on this machine

@@ -3,15 +3,18 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
+import { useNow } from '@/hooks/use-now';
 import { isApiError } from '@/lib/api-client';
 import { formatElapsed } from '@/lib/elapsed';
 import { stationStateKey, useStationState } from '../api/get-station-state';
+import { useCheckInReservation } from '../api/check-in-reservation';
 import { useScanBadge } from '../api/scan-badge';
 import { useEndQueue } from '../hooks/use-end-queue';
 import { useHeartbeat } from '../hooks/use-heartbeat';
 import { useIdleReturn } from '../hooks/use-idle-return';
 import { useStationLost } from '../hooks/use-station-lost';
 import { stationMessage } from '../utils/messages';
+import { reservationLine, reservationWarning } from '../utils/reservation-text';
 import { BadgeReader } from './badge-reader';
 import { DecisionScreen } from './decision-screen';
 import { DutyFlow } from './duty-flow';
@@ -23,7 +26,7 @@ import { StationHeader } from './station-header';
 
 type Screen =
   | { name: 'idle' }
-  | { name: 'decision'; badge: string; answer: StationScanResult; changed?: boolean }
+  | { name: 'decision'; badge: string; answer: StationScanResult; changed?: boolean; checkedIn?: boolean }
   | { name: 'instructor-menu'; instructor: ScannedInstructor; answer: StationScanResult }
   | { name: 'duty'; instructor: ScannedInstructor }
   | { name: 'sign-off'; instructor: ScannedInstructor }
@@ -56,6 +59,9 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
   const [endedIds, setEndedIds] = useState<ReadonlySet<string>>(new Set());
   const [ending, setEnding] = useState(false);
   const scanner = useScanBadge();
+  const checkIn = useCheckInReservation();
+  // Once a minute is enough for the reservation lines; the running clock keeps its own second tick.
+  const now = useNow(30_000);
   const state = useStationState(station.kind === 'machine');
   const { pending, end } = useEndQueue();
   useHeartbeat();
@@ -73,6 +79,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
   /** `changed`: the server refused a start after this badge was cleared, so the answer is asked again. */
   const scan = (badge: string, changed = false) => {
     setMessage(null);
+    checkIn.reset();
     scanner.mutate(badge, {
       onSuccess: (answer) => {
         if (answer.member && answer.canSupervise && !changed) {
@@ -117,6 +124,22 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
   };
 
   const supervisorOnDuty = state.data?.supervisorOnDuty?.firstName ?? null;
+  const nextReservation = state.data?.nextReservation ?? null;
+
+  const checkInFor = (badge: string, answer: StationScanResult) => {
+    const reservation = answer.nextReservation;
+    if (!reservation) return;
+    checkIn.reset();
+    checkIn.mutate(
+      { reservationId: reservation.id, badge },
+      {
+        onSuccess: () => {
+          void queryClient.invalidateQueries({ queryKey: stationStateKey() });
+          setScreen({ name: 'decision', badge, answer: { ...answer, nextReservation: { ...reservation, canCheckIn: false } }, checkedIn: true });
+        },
+      },
+    );
+  };
 
   return (
     <>
@@ -131,6 +154,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
             onBadge={scan}
             scanning={scanner.isPending}
             message={message}
+            warning={reservationWarning(nextReservation, state.data?.runningSession?.memberId ?? null, new Date(now), timeZone)}
           />
         ) : null}
         {screen.name === 'idle' && !running ? (
@@ -139,6 +163,12 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
               <p role="status" className="flex items-center gap-4 rounded-lg border-2 border-link-down px-6 py-3 text-kiosk-body">
                 <Icon name="hourglass" className="size-9" />
                 {KEPT_OFFLINE}
+              </p>
+            ) : null}
+            {nextReservation ? (
+              <p className="flex items-center gap-3 rounded-lg border-2 border-state-reserved px-6 py-3 text-kiosk-body font-bold">
+                <Icon name="hourglass" className="size-9 text-state-reserved" />
+                {reservationLine(nextReservation, new Date(now), timeZone)}
               </p>
             ) : null}
             <BadgeReader prompt="Hold your badge to the camera or scan it" onBadge={scan} busy={scanner.isPending} message={message} />
@@ -154,6 +184,12 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
           <DecisionScreen
             answer={screen.answer}
             changed={screen.changed ?? false}
+            checkIn={{
+              onCheckIn: () => checkInFor(screen.badge, screen.answer),
+              busy: checkIn.isPending,
+              done: screen.checkedIn ?? false,
+              message: checkIn.error ? stationMessage(checkIn.error) : null,
+            }}
             onContinue={() => setScreen({ name: 'safety', badge: screen.badge, answer: screen.answer })}
             onEndOwn={() => {
               if (screen.answer.runningSession) void endSession(screen.answer.runningSession.id, screen.badge);

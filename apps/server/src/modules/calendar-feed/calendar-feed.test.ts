@@ -1,0 +1,82 @@
+import ICAL from 'ical.js';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { calendarFeedCreatedSchema } from '@chuckkey/core';
+import { createMachine } from '@chuckkey/db/factories';
+import { browser, createTestContext, signedIn, type TestContext } from '../../test/harness';
+
+let ctx: TestContext;
+beforeAll(() => {
+  ctx = createTestContext();
+});
+afterAll(() => ctx.close());
+
+const HOUR = 3_600_000;
+const DAY = 24 * HOUR;
+
+function slot(days: number, hours: number): Date {
+  const midnight = new Date();
+  midnight.setUTCHours(0, 0, 0, 0);
+  return new Date(midnight.getTime() + days * DAY + hours * HOUR);
+}
+
+/** The feed's path on this server, from the URL the member was given. */
+const pathOf = (url: string) => new URL(url).pathname;
+
+describe('a member’s calendar feed', () => {
+  it('is made once with a secret URL and read without a sign-in, listing their reservations with cancelled ones marked', async () => {
+    const machine = await createMachine(ctx.db, { category: 'mig_welder', reservable: true });
+    const member = await signedIn(ctx, 'member');
+    const other = await signedIn(ctx, 'member');
+    const kept = await member.post('/api/reservations', { machineId: machine.id, start: slot(2, 9).toISOString(), end: slot(2, 10).toISOString() });
+    const dropped = await member.post('/api/reservations', { machineId: machine.id, start: slot(3, 9).toISOString(), end: slot(3, 10).toISOString() });
+    expect((await member.delete(`/api/reservations/${dropped.body.id}`)).status).toBe(204);
+    const others = await other.post('/api/reservations', { machineId: machine.id, start: slot(4, 9).toISOString(), end: slot(4, 10).toISOString() });
+    expect(others.status).toBe(201);
+
+    const created = await member.post('/api/profile/calendar-feed');
+    expect(created.status).toBe(201);
+    const { url } = calendarFeedCreatedSchema.parse(created.body);
+    expect(url).toMatch(/^http:\/\/chuckkey\.test\/api\/calendar\/[A-Za-z0-9_-]{43}\.ics$/);
+    // The secret is kept hashed: the URL's token is nowhere in the table.
+    const token = /calendar\/([^.]+)\.ics$/.exec(url)![1]!;
+    const stored = await ctx.db('calendar_feeds').first('token_hash').where({ member_id: member.member.id });
+    expect(stored.token_hash).not.toContain(token);
+
+    const feed = await request(ctx.app).get(pathOf(url));
+    expect(feed.status).toBe(200);
+    expect(feed.headers['content-type']).toMatch(/^text\/calendar/);
+    // RFC 5545 §3.1: content lines end in CRLF; §3.7.2: a feed is no scheduling message, so no METHOD.
+    expect(feed.text).toMatch(/\r\n$/);
+    const calendar = new ICAL.Component(ICAL.parse(feed.text));
+    expect(calendar.getFirstPropertyValue('method')).toBeNull();
+    const events = calendar.getAllSubcomponents('vevent').map((event) => ({
+      uid: event.getFirstPropertyValue('uid'),
+      status: event.getFirstPropertyValue('status'),
+    }));
+    // RFC 5545 §3.8.4.7: the UID of each entry is the one its mails carried.
+    expect(events).toEqual([
+      { uid: `${kept.body.id}@chuckkey`, status: 'CONFIRMED' },
+      { uid: `${dropped.body.id}@chuckkey`, status: 'CANCELLED' },
+    ]);
+  });
+
+  it('stops working when replaced or turned off, and answers 404 to an unknown secret', async () => {
+    const member = await signedIn(ctx, 'member');
+    const first = calendarFeedCreatedSchema.parse((await member.post('/api/profile/calendar-feed')).body).url;
+    const second = calendarFeedCreatedSchema.parse((await member.post('/api/profile/calendar-feed')).body).url;
+    expect(second).not.toBe(first);
+    expect((await request(ctx.app).get(pathOf(first))).status).toBe(404);
+    expect((await request(ctx.app).get(pathOf(second))).status).toBe(200);
+
+    expect((await member.delete('/api/profile/calendar-feed')).status).toBe(204);
+    const gone = await request(ctx.app).get(pathOf(second));
+    expect([gone.status, gone.body.code]).toEqual([404, 'calendar_feed_not_found']);
+    expect((await member.delete('/api/profile/calendar-feed')).status).toBe(404);
+  });
+
+  it('needs a sign-in to make one', async () => {
+    const anonymous = await browser(ctx);
+    expect((await anonymous.post('/api/profile/calendar-feed')).status).toBe(401);
+  });
+});
