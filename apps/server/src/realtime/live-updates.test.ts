@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import pg from 'pg';
 import type { Socket as ClientSocket } from 'socket.io-client';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { HEARTBEAT_SILENCE_MINUTES, LIVE_JOIN, SHOP_UPDATE, shopUpdateSchema } from '@chuckkey/core';
@@ -230,5 +231,27 @@ describe('several server processes on one database', () => {
     const onA = nextUpdate(personOnA, machineId, 'tagged_out');
     expect((await reporter.post(`/api/machines/${machineId}/tag-out`, { reason: 'Coolant pump leaking.' })).status).toBe(201);
     expect((await onA).update).toMatchObject({ machineId, state: 'tagged_out' });
+  });
+});
+
+describe('between processes, at rest', () => {
+  it('a process with the default heartbeat sends a handful of notifications a minute, not a stream', async () => {
+    const server = await startLiveServer({}, {});
+    const listener = new pg.Client({ connectionString: server.config.DATABASE_URL });
+    await listener.connect();
+    let notifications = 0;
+    listener.on('notification', () => {
+      notifications += 1;
+    });
+    try {
+      // The adapter's channel for the default namespace.
+      await listener.query('LISTEN "socket.io#/"');
+      await new Promise((resolve) => setTimeout(resolve, 1_500));
+      // @socket.io/postgres-adapter's heartbeat is every 5 s by default: at most one or two here.
+      expect(notifications).toBeLessThanOrEqual(2);
+    } finally {
+      await listener.end();
+      await server.close();
+    }
   });
 });

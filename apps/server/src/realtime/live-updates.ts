@@ -158,7 +158,9 @@ export function createLiveUpdates({ config, db, logger }: { config: Config; db: 
         serveClient: false,
         adapter: createAdapter(pool, {
           tableName: ATTACHMENTS_TABLE,
-          heartbeatInterval: options.heartbeatIntervalMs,
+          // Given only when set: the adapter merges its options over its defaults, so an explicit
+          // undefined would replace the 5-second heartbeat with one on every timer tick.
+          ...(options.heartbeatIntervalMs === undefined ? {} : { heartbeatInterval: options.heartbeatIntervalMs }),
           errorHandler: (error) => logger.warn({ err: error }, 'live updates: a message between processes failed'),
         }),
       });

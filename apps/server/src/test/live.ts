@@ -22,14 +22,18 @@ export interface LiveServer extends TestContext {
 
 /**
  * Starts the app as main.ts does, on a free loopback port. Processes tell each other they are alive
- * every 100 ms instead of every 5 s, so that a test need not wait long to see the other process.
+ * every 100 ms instead of every 5 s, so that a test need not wait long to see the other process
+ * (pass `{}` as options for the production heartbeat).
  */
-export async function startLiveServer(overrides: Record<string, string> = {}): Promise<LiveServer> {
+export async function startLiveServer(
+  overrides: Record<string, string> = {},
+  options: { heartbeatIntervalMs?: number } = { heartbeatIntervalMs: 100 },
+): Promise<LiveServer> {
   const config = testConfig(overrides);
   const logger = createLogger(process.env.TEST_LOG_LEVEL ?? 'silent');
   const db = createDb(config.DATABASE_URL, logger, 5);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
-  const live = createLiveUpdates({ config, db, logger }, { heartbeatIntervalMs: 100 });
+  const live = createLiveUpdates({ config, db, logger }, options);
   const deps: Deps = { config, db, logger, mailer, live };
   const { app, close, signIn } = createApp(deps);
   const http = await listen(app, 0, '127.0.0.1');

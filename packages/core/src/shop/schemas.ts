@@ -39,6 +39,13 @@ export const machineSchema = z.object({
 });
 export type Machine = z.infer<typeof machineSchema>;
 
+export const outboxAttachmentSchema = z.object({
+  filename: z.string().nullable(),
+  contentType: z.string(),
+  size: z.number().int(),
+});
+export type OutboxAttachment = z.infer<typeof outboxAttachmentSchema>;
+
 export const outboxMessageSchema = z.object({
   id: z.uuid(),
   from: z.string(),
@@ -46,8 +53,13 @@ export const outboxMessageSchema = z.object({
   subject: z.string(),
   text: z.string(),
   receivedAt: z.string(),
+  attachments: z.array(outboxAttachmentSchema),
 });
 export type OutboxMessage = z.infer<typeof outboxMessageSchema>;
+export const outboxAttachmentParamsSchema = z.object({
+  id: z.uuid({ error: 'Not a valid id.' }),
+  index: z.coerce.number({ error: 'Not a valid attachment number.' }).int({ error: 'Not a valid attachment number.' }).min(0, { error: 'Not a valid attachment number.' }),
+});
 export const outboxListSchema = z.object({ items: z.array(outboxMessageSchema), total: z.number().int() });
 
 export const healthSchema = z.object({

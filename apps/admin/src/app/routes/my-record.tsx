@@ -4,6 +4,7 @@ import { Panel } from '../../components/ui/panel';
 import { BadgePanel } from '../../features/badges/components/badge-panel';
 import { PhotoPanel } from '../../features/badges/components/photo-panel';
 import { PinForm } from '../../features/badges/components/pin-form';
+import { CalendarFeedPanel } from '../../features/calendar-feed/components/calendar-feed-panel';
 import { useShop } from '../../features/shop/api/get-shop';
 import { SignOffList } from '../../features/sign-offs/components/sign-off-list';
 import { useMemberWaiver } from '../../features/waivers/api/get-member-waiver';
@@ -19,7 +20,7 @@ export default function MyRecordRoute() {
 
   return (
     <>
-      <PageHeading title="My record" description="What you are signed off on, your badge and PIN, and the shop's safety waiver." />
+      <PageHeading title="My record" description="What you are signed off on, your badge and PIN, the shop's safety waiver, and your calendar feed." />
       {waiverMissing && (
         <Alert tone="warning" title="Your safety waiver is not on file">
           Stations clear you for no machine until you accept it.{' '}
@@ -47,6 +48,7 @@ export default function MyRecordRoute() {
           <BadgePanel memberId={user.id} timeZone={timeZone} />
           <PinForm />
           <PhotoPanel memberId={user.id} name={user.name} />
+          <CalendarFeedPanel />
         </div>
       </div>
     </>

@@ -1,4 +1,4 @@
-import type { OutboxMessage } from '@chuckkey/core';
+import type { OutboxAttachment, OutboxMessage } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 
 export interface CaughtMail {
@@ -15,6 +15,15 @@ export interface CaughtAttachment {
   filename: string | null;
   contentType: string;
   content: string;
+}
+
+/** What the list shows of an attachment; the content itself is fetched one at a time. */
+function described(attachment: CaughtAttachment): OutboxAttachment {
+  return {
+    filename: attachment.filename,
+    contentType: attachment.contentType,
+    size: Buffer.byteLength(attachment.content, 'utf8'),
+  };
 }
 
 export function outboxRepository(db: Db) {
@@ -40,6 +49,7 @@ export function outboxRepository(db: Db) {
           subject: 'subject',
           text: 'text_body',
           receivedAt: 'received_at',
+          attachments: 'attachments',
           total: db.raw('count(*) over ()'),
         })
         .orderBy([{ column: 'received_at', order: 'desc' }, { column: 'id' }])
@@ -47,9 +57,18 @@ export function outboxRepository(db: Db) {
         .offset((page - 1) * pageSize);
       const total = rows[0]?.total ?? Number((await db('outbox_messages').count({ count: '*' }))[0]?.count ?? 0);
       return {
-        items: rows.map(({ total: _total, receivedAt, ...row }) => ({ ...row, receivedAt: (receivedAt as Date).toISOString() })),
+        items: rows.map(({ total: _total, receivedAt, attachments, ...row }) => ({
+          ...row,
+          receivedAt: (receivedAt as Date).toISOString(),
+          attachments: ((attachments ?? []) as CaughtAttachment[]).map(described),
+        })),
         total: Number(total),
       };
+    },
+
+    async attachment(id: string, index: number): Promise<CaughtAttachment | undefined> {
+      const row = await db('outbox_messages').first({ attachments: 'attachments' }).where({ id });
+      return ((row?.attachments ?? []) as CaughtAttachment[])[index];
     },
   };
 }

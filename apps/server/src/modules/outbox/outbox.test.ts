@@ -2,6 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createMember } from '@chuckkey/db/factories';
 import { browser, caughtMail, createTestContext, signedIn, type TestContext } from '../../test/harness';
+import { outboxRepository } from './outbox.repository';
 
 let ctx: TestContext;
 beforeAll(() => {
@@ -16,6 +17,7 @@ interface Listed {
   subject: string;
   text: string;
   receivedAt: string;
+  attachments: { filename: string | null; contentType: string; size: number }[];
 }
 
 async function outboxCount(): Promise<number> {
@@ -58,6 +60,7 @@ describe('GET /api/outbox', () => {
       subject: 'Reset your Chuckkey password',
       text: expect.stringContaining(`${ctx.config.publicUrl}/reset-password?token=`),
       receivedAt: expect.stringMatching(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/),
+      attachments: [],
     });
     expect(mail.text).toContain('Hello Quill,');
   });
@@ -99,5 +102,94 @@ describe('GET /api/outbox', () => {
 
     expect(res.status).toBe(401);
     expect(res.body.code).toBe('unauthenticated');
+  });
+});
+
+/** A caught message with a calendar entry, stored the way the mail catcher stores one. */
+async function mailWithCalendarEntry(to: string, content: string): Promise<string> {
+  const subject = `Reservation confirmed ${to}`;
+  await outboxRepository(ctx.db).insert({
+    messageId: null,
+    from: 'Chuckkey <chuckkey@example.org>',
+    to: [to],
+    subject,
+    text: 'See the attached calendar entry.',
+    html: null,
+    attachments: [{ filename: 'reservation.ics', contentType: 'text/calendar; charset=utf-8; method=REQUEST', content }],
+  });
+  const row = await ctx.db('outbox_messages').first('id').where({ subject });
+  return (row as { id: string }).id;
+}
+
+// "é" is two bytes in UTF-8, so the size is counted in bytes rather than characters.
+const CALENDAR = 'BEGIN:VCALENDAR\r\nMETHOD:REQUEST\r\nSUMMARY:Café MIG welder\r\nEND:VCALENDAR\r\n';
+
+describe('attachments of caught mail', () => {
+  it('the list names each attachment with its content type and size in bytes', async () => {
+    const to = (await createMember(ctx.db)).email;
+    const id = await mailWithCalendarEntry(to, CALENDAR);
+    const admin = await signedIn(ctx, 'admin');
+
+    const res = await admin.get('/api/outbox?pageSize=100');
+
+    expect(res.status).toBe(200);
+    const mail = (res.body.items as Listed[]).find((m) => m.id === id);
+    // RFC 6047 section 2.4: an iTIP message travels as text/calendar with its method parameter.
+    expect(mail?.attachments).toEqual([
+      { filename: 'reservation.ics', contentType: 'text/calendar; charset=utf-8; method=REQUEST', size: Buffer.byteLength(CALENDAR) },
+    ]);
+    expect(mail?.attachments[0]?.size).toBe(CALENDAR.length + 1);
+  });
+
+  it('downloads an attachment with its content type and file name', async () => {
+    const to = (await createMember(ctx.db)).email;
+    const id = await mailWithCalendarEntry(to, CALENDAR);
+    const admin = await signedIn(ctx, 'admin');
+
+    const res = await admin.get(`/api/outbox/${id}/attachments/0`);
+
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('text/calendar; charset=utf-8; method=REQUEST');
+    // RFC 6266 section 4.1: "attachment" with a filename parameter (a token here, so unquoted)
+    // makes the browser save the file.
+    expect(res.headers['content-disposition']).toBe('attachment; filename=reservation.ics');
+    expect(res.text).toBe(CALENDAR);
+  });
+
+  it('answers 404 for an attachment number the message does not have, and for an unknown message', async () => {
+    const to = (await createMember(ctx.db)).email;
+    const id = await mailWithCalendarEntry(to, CALENDAR);
+    const admin = await signedIn(ctx, 'admin');
+
+    const pastEnd = await admin.get(`/api/outbox/${id}/attachments/1`);
+    const unknown = await admin.get('/api/outbox/00000000-0000-4000-8000-000000000000/attachments/0');
+
+    expect(pastEnd.status).toBe(404);
+    expect(pastEnd.body.code).toBe('attachment_not_found');
+    expect(unknown.status).toBe(404);
+    expect(unknown.body.code).toBe('attachment_not_found');
+  });
+
+  it('answers 400 naming index when the attachment number is not a whole number', async () => {
+    const admin = await signedIn(ctx, 'admin');
+
+    const res = await admin.get('/api/outbox/00000000-0000-4000-8000-000000000000/attachments/first');
+
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.errors)).toEqual(['index']);
+  });
+
+  it('for a member answers 403, and signed out 401', async () => {
+    const to = (await createMember(ctx.db)).email;
+    const id = await mailWithCalendarEntry(to, CALENDAR);
+    const member = await signedIn(ctx, 'member');
+
+    const forbidden = await member.get(`/api/outbox/${id}/attachments/0`);
+    const signedOut = await request(ctx.app).get(`/api/outbox/${id}/attachments/0`);
+
+    expect(forbidden.status).toBe(403);
+    expect(forbidden.body.code).toBe('forbidden');
+    expect(signedOut.status).toBe(401);
+    expect(signedOut.body.code).toBe('unauthenticated');
   });
 });

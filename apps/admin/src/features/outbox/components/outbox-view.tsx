@@ -10,6 +10,7 @@ import { Spinner } from '../../../components/ui/spinner';
 import { formatDateTime } from '../../../lib/format';
 import { useOutbox } from '../api/get-outbox';
 import { useOutboxSelection } from '../hooks/use-outbox-selection';
+import { MessageAttachments } from './message-attachments';
 import { MessageBody } from './message-body';
 
 const OUTBOX_PAGE_SIZE = 25;
@@ -39,6 +40,7 @@ function MessageDetail({ message, timeZone }: { message: OutboxMessage; timeZone
         </dd>
       </dl>
       <MessageBody text={message.text} />
+      <MessageAttachments messageId={message.id} attachments={message.attachments} />
     </article>
   );
 }
