@@ -1,40 +1,16 @@
-import knexFactory, { type Knex } from 'knex';
-import { register } from 'tsx/esm/api';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { closureInputSchema, hoursOnDate, shopHoursAt, weeklyHoursInputSchema } from '@chuckkey/core';
 import { demoShop } from '../seeds/01_shop';
 import { seed } from '../seeds/08_shop_hours';
-import { knexConfig } from './config';
-import { dropDatabase, setupDatabase } from './setup';
+import { ownMigratedDatabase } from './test-database';
 
-// Knex imports migration files at run time; tsx lets this process import TypeScript.
-register();
-
-const url = process.env.DATABASE_URL;
-if (!url) throw new Error('DATABASE_URL must name a database these tests may drop and create (npm test sets it).');
-
-/** A database of this file's own, migrated without the rest of the demo: the hours need none of it. */
-const sibling = new URL(url);
-sibling.pathname = `${sibling.pathname}_shop_hours`;
-const databaseUrl = sibling.toString();
-
-let db: Knex;
-beforeAll(async () => {
-  await dropDatabase(databaseUrl);
-  await setupDatabase(databaseUrl, { seed: false });
-  db = knexFactory(knexConfig(databaseUrl, { min: 0, max: 2 }));
-  await seed(db);
-});
-afterAll(async () => {
-  await db?.destroy();
-  await dropDatabase(databaseUrl);
-});
+const own = ownMigratedDatabase('shop_hours', seed);
 
 async function stored() {
-  const weekly = await db('shop_hours')
-    .select(db.raw(`weekday, to_char(opens_at, 'HH24:MI') as "opensAt", to_char(closes_at, 'HH24:MI') as "closesAt"`))
+  const weekly = await own.db('shop_hours')
+    .select(own.db.raw(`weekday, to_char(opens_at, 'HH24:MI') as "opensAt", to_char(closes_at, 'HH24:MI') as "closesAt"`))
     .orderBy(['weekday', 'opens_at']);
-  const closures = await db('shop_closures').select(db.raw(`starts_on::text as "startsOn", ends_on::text as "endsOn", reason`));
+  const closures = await own.db('shop_closures').select(own.db.raw(`starts_on::text as "startsOn", ends_on::text as "endsOn", reason`));
   return { weekly, closures };
 }
 
