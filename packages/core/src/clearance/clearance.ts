@@ -1,5 +1,3 @@
-import { TZDate } from '@date-fns/tz';
-import { differenceInCalendarDays } from 'date-fns';
 import type { Role } from '../people/roles';
 import { signOffState } from '../trainings/expiry';
 import type { SignOffLevel } from '../trainings/schemas';
@@ -321,30 +319,61 @@ function dateFormat(timeZone: string): Intl.DateTimeFormat {
   return format;
 }
 
+/** The English month names the en-GB format writes, in order, to number a month from its name. */
+const monthNames = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+
+interface LocalParts {
+  weekday: string;
+  day: string;
+  month: string;
+  year: string;
+  hour: string;
+  minute: string;
+  /** Days since 1970-01-01 of the date on the shop's calendar, to count calendar days between two instants. */
+  dayNumber: number;
+}
+
+/**
+ * Each instant is read off the shop's wall clock once (formatToParts is the costly part of wording
+ * a time). The instants scans word recur from scan to scan (the shop's opening time, a
+ * reservation's start, a sign-off's expiry), so the readings are kept across decisions; a time
+ * zone's rules do not change while the process runs. The cache is emptied when it grows large.
+ */
+const wallReadings = new Map<string, LocalParts>();
+const WALL_READINGS_KEPT = 2_000;
+
+function wallReading(timeZone: string, date: Date): LocalParts {
+  const key = `${timeZone} ${date.getTime()}`;
+  const known = wallReadings.get(key);
+  if (known) return known;
+  const found: Partial<Record<Intl.DateTimeFormatPartTypes, string>> = {};
+  for (const part of dateFormat(timeZone).formatToParts(date)) found[part.type] = part.value;
+  const parts: LocalParts = {
+    weekday: found.weekday ?? '',
+    day: found.day ?? '',
+    month: found.month ?? '',
+    year: found.year ?? '',
+    hour: String(Number(found.hour ?? '0')),
+    minute: found.minute ?? '',
+    dayNumber: Date.UTC(Number(found.year), monthNames.indexOf(found.month ?? ''), Number(found.day)) / DAY,
+  };
+  if (wallReadings.size >= WALL_READINGS_KEPT) wallReadings.clear();
+  wallReadings.set(key, parts);
+  return parts;
+}
+
 class Wording {
   constructor(
     private readonly timeZone: string,
     private readonly now: Date,
   ) {}
 
-  private get parts(): Intl.DateTimeFormat {
-    return dateFormat(this.timeZone);
-  }
-
-  private local(date: Date): Record<'weekday' | 'day' | 'month' | 'year' | 'hour' | 'minute', string> {
-    const found = Object.fromEntries(this.parts.formatToParts(date).map((p) => [p.type, p.value]));
-    return {
-      weekday: found.weekday ?? '',
-      day: found.day ?? '',
-      month: found.month ?? '',
-      year: found.year ?? '',
-      hour: String(Number(found.hour ?? '0')),
-      minute: found.minute ?? '',
-    };
+  private local(date: Date): LocalParts {
+    return wallReading(this.timeZone, date);
   }
 
   private daysAhead(date: Date): number {
-    return differenceInCalendarDays(new TZDate(date.getTime(), this.timeZone), new TZDate(this.now.getTime(), this.timeZone));
+    return this.local(date).dayNumber - this.local(this.now).dayNumber;
   }
 
   /** "14:05", with the day added when it is not today. */

@@ -134,6 +134,24 @@ export function hoursOnDate(schedule: readonly WeeklyHours[], closures: readonly
   };
 }
 
+/**
+ * Instants of wall-clock times in a time zone, as TZDate works them out. The same few (today's
+ * opening and closing times) are asked for on every scan, and a time zone's rules do not change
+ * while the process runs, so each is worked out once; the cache is emptied when it grows large.
+ */
+const wallClockInstants = new Map<string, number>();
+const WALL_CLOCK_CACHE_SIZE = 1_000;
+function wallClockInstant(timeZone: string, date: CalendarDate, hour: number, minute: number): Date {
+  const key = `${timeZone} ${date.year}-${date.month}-${date.day} ${hour}:${minute}`;
+  let time = wallClockInstants.get(key);
+  if (time === undefined) {
+    time = new TZDate(date.year, date.month - 1, date.day, hour, minute, 0, 0, timeZone).getTime();
+    if (wallClockInstants.size >= WALL_CLOCK_CACHE_SIZE) wallClockInstants.clear();
+    wallClockInstants.set(key, time);
+  }
+  return new Date(time);
+}
+
 const openAllTheTime: ShopHoursNow = { open: true, opensAt: null, closesAt: null, closure: null };
 
 /**
@@ -170,7 +188,7 @@ export function shopHoursAt(schedule: readonly WeeklyHours[], closures: readonly
   const instant = (minutes: number): Date => {
     const date = addDays(today, Math.floor(minutes / MINUTES_PER_DAY));
     const within = minutes - Math.floor(minutes / MINUTES_PER_DAY) * MINUTES_PER_DAY;
-    return new Date(new TZDate(date.year, date.month - 1, date.day, Math.floor(within / 60), within % 60, 0, 0, timeZone).getTime());
+    return wallClockInstant(timeZone, date, Math.floor(within / 60), within % 60);
   };
 
   const closure = closures.length > 0 ? closureOn(closures, isoDate(today)) : null;

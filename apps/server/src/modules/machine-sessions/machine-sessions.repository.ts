@@ -115,17 +115,13 @@ required as (
     coalesce((
       select array_agg(recent."firstName" order by recent.latest desc)
       from (
-        -- Per teacher, their latest sign-off of the training: a few index probes, however many
-        -- members the training has signed off.
-        select i.first_name as "firstName", last.latest
-        from members i
-        cross join lateral (
-          select max(s.signed_at) as latest from sign_offs s
-          where s.training_id = t.id and s.signed_by = i.id
-            and s.signed_at > now() - make_interval(months => $3::int)
-        ) last
-        where i.active and i.role in ('instructor', 'admin') and last.latest is not null
-        order by last.latest desc
+        -- The training's teachers by their latest sign-off of it (kept by a trigger on sign_offs):
+        -- the first few entries of one index, however many members the training has signed off.
+        select i.first_name as "firstName", tt.last_signed_at as latest
+        from training_teachers tt join members i on i.id = tt.member_id
+        where tt.training_id = t.id and tt.last_signed_at > now() - make_interval(months => $3::int)
+          and i.active and i.role in ('instructor', 'admin')
+        order by tt.last_signed_at desc
         limit $4::int
       ) recent
     ), '{}') as teachers
