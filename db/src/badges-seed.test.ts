@@ -1,52 +1,11 @@
-import knexFactory, { type Knex } from 'knex';
-import { register } from 'tsx/esm/api';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { badgeCodeBox, badgeCodeHash } from './badge-codes';
-import { knexConfig } from './config';
-import { dropDatabase, setupDatabase } from './setup';
-
-// Knex imports seed files at run time; tsx lets this process import TypeScript.
-register();
-
-const url = process.env.DATABASE_URL;
-if (!url) throw new Error('DATABASE_URL must name a database these tests may drop and create (npm test sets it).');
-
-/** A database of this file's own beside the one the set-up tests use, so the two can run at once. */
-function siblingUrl(suffix: string): string {
-  const sibling = new URL(url!);
-  sibling.pathname = `${sibling.pathname}_${suffix}`;
-  return sibling.toString();
-}
+import { ownDatabase } from './test-database';
 
 const BADGE_SECRET = 'demo-badge-secret-used-by-the-seed-tests';
 
-async function seededDatabase(suffix: string, badgeSecret: string | undefined): Promise<{ db: Knex; url: string }> {
-  const databaseUrl = siblingUrl(suffix);
-  const before = process.env.BADGE_SECRET;
-  if (badgeSecret) process.env.BADGE_SECRET = badgeSecret;
-  else delete process.env.BADGE_SECRET;
-  try {
-    await dropDatabase(databaseUrl);
-    await setupDatabase(databaseUrl, { seed: true });
-  } finally {
-    if (before === undefined) delete process.env.BADGE_SECRET;
-    else process.env.BADGE_SECRET = before;
-  }
-  return { db: knexFactory(knexConfig(databaseUrl, { min: 0, max: 2 })), url: databaseUrl };
-}
-
-let withSecret: { db: Knex; url: string };
-let withoutSecret: { db: Knex; url: string };
-beforeAll(async () => {
-  withSecret = await seededDatabase('badges_with_secret', BADGE_SECRET);
-  withoutSecret = await seededDatabase('badges_without_secret', undefined);
-});
-afterAll(async () => {
-  for (const seeded of [withSecret, withoutSecret]) {
-    await seeded?.db.destroy();
-    if (seeded) await dropDatabase(seeded.url);
-  }
-});
+const withSecret = ownDatabase('badges_with_secret', { seed: true, env: { BADGE_SECRET } });
+const withoutSecret = ownDatabase('badges_without_secret', { seed: true, env: { BADGE_SECRET: undefined } });
 
 describe('the demo shop waiver', () => {
   it('is version 1, the shop’s own text on machine and welding risks, PPE, rules and training', async () => {

@@ -1,31 +1,8 @@
-import knexFactory, { type Knex } from 'knex';
-import { register } from 'tsx/esm/api';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { checklistSchema, signOffState, trainingInputSchema } from '@chuckkey/core';
-import { knexConfig } from './config';
-import { dropDatabase, setupDatabase } from './setup';
+import { ownDatabase } from './test-database';
 
-// Knex imports seed files at run time; tsx lets this process import TypeScript.
-register();
-
-const url = process.env.DATABASE_URL;
-if (!url) throw new Error('DATABASE_URL must name a database these tests may drop and create (npm test sets it).');
-
-/** A database of this file's own beside the one the set-up tests use, so the two can run at once. */
-const sibling = new URL(url);
-sibling.pathname = `${sibling.pathname}_trainings`;
-const databaseUrl = sibling.toString();
-
-let db: Knex;
-beforeAll(async () => {
-  await dropDatabase(databaseUrl);
-  await setupDatabase(databaseUrl, { seed: true });
-  db = knexFactory(knexConfig(databaseUrl, { min: 0, max: 2 }));
-});
-afterAll(async () => {
-  await db?.destroy();
-  await dropDatabase(databaseUrl);
-});
+const own = ownDatabase('trainings', { seed: true });
 
 interface SignOffRow {
   member_id: string;
@@ -41,7 +18,7 @@ interface SignOffRow {
 }
 
 async function signOffs(): Promise<SignOffRow[]> {
-  return db('sign_offs as s')
+  return own.db('sign_offs as s')
     .join('members as m', 'm.id', 's.member_id')
     .join('members as by', 'by.id', 's.signed_by')
     .join('trainings as t', 't.id', 's.training_id')
@@ -50,7 +27,7 @@ async function signOffs(): Promise<SignOffRow[]> {
 
 describe('the demo shop’s trainings', () => {
   it('are the metal shop’s usual courses, each with 3 to 6 practical items that the web form would accept', async () => {
-    const trainings = await db('trainings').select('name', 'description', 'checklist', 'validity_months as validityMonths').orderBy('name');
+    const trainings = await own.db('trainings').select('name', 'description', 'checklist', 'validity_months as validityMonths').orderBy('name');
 
     expect(trainings.map((t) => t.name)).toEqual(
       expect.arrayContaining(['General shop safety', 'Metal lathe fundamentals', 'Milling fundamentals', 'MIG welding', 'TIG welding', 'Band saw', 'Surface grinder']),
@@ -65,7 +42,7 @@ describe('the demo shop’s trainings', () => {
   });
 
   it('are required by every machine: general shop safety plus the machine’s own', async () => {
-    const rows = await db('machines as m')
+    const rows = await own.db('machines as m')
       .leftJoin('machine_trainings as mt', 'mt.machine_id', 'm.id')
       .leftJoin('trainings as t', 't.id', 'mt.training_id')
       .select('m.name as machine', 't.name as training');
@@ -84,7 +61,7 @@ describe('the demo shop’s trainings', () => {
 
 describe('the demo machines’ safety checklists', () => {
   it('give every machine the usual cautions, ending with the shop’s own rules', async () => {
-    const machines = await db('machines').select('name', 'category', 'safety_checklist');
+    const machines = await own.db('machines').select('name', 'category', 'safety_checklist');
 
     for (const machine of machines) {
       expect(checklistSchema.safeParse(machine.safety_checklist).success, machine.name).toBe(true);
@@ -134,7 +111,7 @@ describe('the demo shop’s sign-offs', () => {
 
   it('give most active members general shop safety and fewer of them the lathe or MIG welding', async () => {
     const rows = await signOffs();
-    const active = await db('members').where({ active: true }).count({ count: '*' });
+    const active = await own.db('members').where({ active: true }).count({ count: '*' });
     const holders = (training: string) => new Set(rows.filter((r) => r.training === training && r.active).map((r) => r.member_id)).size;
     const activeCount = Number(active[0]!.count);
 
@@ -154,9 +131,9 @@ describe('the demo shop’s sign-offs', () => {
   });
 
   it('are each in the audit log, with the revocation too', async () => {
-    const [created] = await db('audit_log').where({ action: 'sign_off.created' }).count({ count: '*' });
-    const [revoked] = await db('audit_log').where({ action: 'sign_off.revoked' }).count({ count: '*' });
-    const [total] = await db('sign_offs').count({ count: '*' });
+    const [created] = await own.db('audit_log').where({ action: 'sign_off.created' }).count({ count: '*' });
+    const [revoked] = await own.db('audit_log').where({ action: 'sign_off.revoked' }).count({ count: '*' });
+    const [total] = await own.db('sign_offs').count({ count: '*' });
 
     expect(Number(created!.count)).toBe(Number(total!.count));
     expect(Number(revoked!.count)).toBe(1);
