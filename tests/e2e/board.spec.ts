@@ -60,6 +60,39 @@ async function removeBoardStation(db: Knex, stationId: string | undefined): Prom
   await db('stations').where({ id: stationId }).delete();
 }
 
+/**
+ * `pairNewBoard(admin)` pairs the test's page as a new wall board, and `floorMachine(name,
+ * category)` adds a machine in an area of its own; both are removed again after the test,
+ * whatever it did.
+ */
+const boardTest = test.extend<{
+  pairNewBoard: (admin: CreatedMember) => Promise<void>;
+  floorMachine: (name: string, category: MachineCategory) => Promise<MachineRow>;
+}>({
+  pairNewBoard: async ({ page, db }, use) => {
+    const boards: string[] = [];
+    await use(async (admin) => {
+      const board = await createStationAsAdmin(page.request, admin, { kind: 'board' });
+      boards.push(board.id);
+      await pairBoard(page, board.pairingCode);
+    });
+    for (const id of boards) await removeBoardStation(db, id);
+  },
+  floorMachine: async ({ db }, use) => {
+    const machines: MachineRow[] = [];
+    await use(async (name, category) => {
+      const machine = await createMachine(db, { name: `${name} ${suffix()}`, category });
+      machines.push(machine);
+      return machine;
+    });
+    for (const machine of machines) {
+      await db('machine_sessions').where({ machine_id: machine.id }).delete();
+      await db('machines').where({ id: machine.id }).delete();
+      await db('areas').where({ id: machine.area_id }).delete();
+    }
+  },
+});
+
 const machineNames: [string, MachineCategory][] = [
   ['Engine lathe', 'lathe'],
   ['Toolroom lathe', 'lathe'],
@@ -202,68 +235,51 @@ test.describe('the wall board', () => {
     }
   });
 
-  test('a tag-out reported by a signed-in member shows its reason on the board', async ({ page, request, db, createUser }) => {
+  boardTest('a tag-out reported by a signed-in member shows its reason on the board', async ({ page, request, createUser, pairNewBoard, floorMachine }) => {
     const admin = await createUser({ role: 'admin' });
     const member = await createUser({ role: 'member' });
-    const machine = await createMachine(db, { name: `Horizontal band saw ${suffix()}`, category: 'band_saw' });
-    let boardId: string | undefined;
-    try {
-      const board = await createStationAsAdmin(page.request, admin, { kind: 'board' });
-      boardId = board.id;
-      await pairBoard(page, board.pairingCode);
-      const plate = plateOf(page, machine.name);
-      await expect(plate).toContainText('Available');
+    const machine = await floorMachine('Horizontal band saw', 'band_saw');
+    await pairNewBoard(admin);
+    const plate = plateOf(page, machine.name);
+    await expect(plate).toContainText('Available');
 
-      const headers = await signedIn(request, member);
-      const reason = 'Blade guide bearing is seized';
-      const tagged = await request.post(`/api/machines/${machine.id}/tag-out`, { headers, data: { reason } });
-      expect(tagged.status()).toBe(201);
+    const headers = await signedIn(request, member);
+    const reason = 'Blade guide bearing is seized';
+    const tagged = await request.post(`/api/machines/${machine.id}/tag-out`, { headers, data: { reason } });
+    expect(tagged.status()).toBe(201);
 
-      await expect(plate).toContainText('Tagged out');
-      await expect(plate).toContainText(reason);
-    } finally {
-      await removeBoardStation(db, boardId);
-      await db('machines').where({ id: machine.id }).delete();
-      await db('areas').where({ id: machine.area_id }).delete();
-    }
+    await expect(plate).toContainText('Tagged out');
+    await expect(plate).toContainText(reason);
   });
 
-  test('the board shows who is on a machine by first name and last initial, and no e-mail, last name or badge code', async ({
+  boardTest('the board shows who is on a machine by first name and last initial, and no e-mail, last name or badge code', async ({
     page,
     db,
     createUser,
+    pairNewBoard,
+    floorMachine,
   }) => {
     const admin = await createUser({ role: 'admin' });
     const member = await createUser({ role: 'member', first_name: 'Marisol', last_name: `Quarrington${suffix()}` });
     const badge = await createBadge(db, { memberId: member.id, badgeSecret: badgeSecret() });
-    const machine = await createMachine(db, { name: `TIG welder ${suffix()}`, category: 'tig_welder' });
+    const machine = await floorMachine('TIG welder', 'tig_welder');
     await db('machine_sessions').insert({ machine_id: machine.id, member_id: member.id, started_at: db.raw("now() - interval '25 minutes'") });
     const answers: Promise<string>[] = [];
     page.on('response', (response) => {
       if (new URL(response.url()).pathname === '/api/board' && response.ok()) answers.push(response.text());
     });
-    let boardId: string | undefined;
-    try {
-      const board = await createStationAsAdmin(page.request, admin, { kind: 'board' });
-      boardId = board.id;
-      await pairBoard(page, board.pairingCode);
+    await pairNewBoard(admin);
 
-      const plate = plateOf(page, machine.name);
-      await expect(plate).toContainText('In use');
-      await expect(plate).toContainText('Marisol Q.');
+    const plate = plateOf(page, machine.name);
+    await expect(plate).toContainText('In use');
+    await expect(plate).toContainText('Marisol Q.');
 
-      const rendered = await page.content();
-      const payloads = (await Promise.all(answers)).join('\n');
-      expect(payloads.length).toBeGreaterThan(0);
-      for (const secret of [member.email, member.last_name, badge.code]) {
-        expect(rendered).not.toContain(secret);
-        expect(payloads).not.toContain(secret);
-      }
-    } finally {
-      await db('machine_sessions').where({ machine_id: machine.id }).delete();
-      await removeBoardStation(db, boardId);
-      await db('machines').where({ id: machine.id }).delete();
-      await db('areas').where({ id: machine.area_id }).delete();
+    const rendered = await page.content();
+    const payloads = (await Promise.all(answers)).join('\n');
+    expect(payloads.length).toBeGreaterThan(0);
+    for (const secret of [member.email, member.last_name, badge.code]) {
+      expect(rendered).not.toContain(secret);
+      expect(payloads).not.toContain(secret);
     }
   });
 
@@ -314,19 +330,17 @@ test.describe('the wall board', () => {
   });
 
   for (const total of [10, 60]) {
-    test(`${total} machines fit a 1920×1080 and a 1280×720 screen without scrolling, every nameplate whole`, async ({
+    boardTest(`${total} machines fit a 1920×1080 and a 1280×720 screen without scrolling, every nameplate whole`, async ({
       page,
       db,
       createUser,
+      pairNewBoard,
     }) => {
       const admin = await createUser({ role: 'admin' });
       const member = await createUser({ role: 'member' });
       const floor = await arrangeFloor(db, total, member);
-      let boardId: string | undefined;
       try {
-        const board = await createStationAsAdmin(page.request, admin, { kind: 'board' });
-        boardId = board.id;
-        await pairBoard(page, board.pairingCode);
+        await pairNewBoard(admin);
         await expect(page.getByRole('main').getByRole('listitem')).toHaveCount(total);
 
         for (const screen of screens) {
@@ -334,28 +348,23 @@ test.describe('the wall board', () => {
           await expect.poll(() => fitProblems(page), { message: `at ${screen.width}×${screen.height}` }).toEqual(fits);
         }
       } finally {
-        await removeBoardStation(db, boardId);
         await floor.remove();
       }
     });
   }
 
-  test('the board with machines in every state passes the automatic WCAG 2.2 AA checks', async ({ page, db, createUser }) => {
+  boardTest('the board with machines in every state passes the automatic WCAG 2.2 AA checks', async ({ page, db, createUser, pairNewBoard }) => {
     const admin = await createUser({ role: 'admin' });
     const member = await createUser({ role: 'member' });
     const floor = await arrangeFloor(db, 10, member);
-    let boardId: string | undefined;
     try {
-      const board = await createStationAsAdmin(page.request, admin, { kind: 'board' });
-      boardId = board.id;
-      await pairBoard(page, board.pairingCode);
+      await pairNewBoard(admin);
       for (const state of ['Available', 'In use', 'Tagged out', 'Offline']) {
         await expect(page.getByRole('main').getByText(state, { exact: true }).first()).toBeVisible();
       }
 
       await expectNoWcagViolations(page);
     } finally {
-      await removeBoardStation(db, boardId);
       await floor.remove();
     }
   });
@@ -365,49 +374,37 @@ test.describe('the wall board', () => {
     const screenZone = 'Pacific/Kiritimati';
     test.use({ timezoneId: screenZone });
 
-    test('the board’s clock shows the time in the shop’s time zone', async ({ page, shop, db, createUser }) => {
+    boardTest('the board’s clock shows the time in the shop’s time zone', async ({ page, shop, createUser, pairNewBoard }) => {
       const admin = await createUser({ role: 'admin' });
       const instant = new Date('2027-03-05T15:42:00Z');
       const clock = (timeZone: string) =>
         new Intl.DateTimeFormat('en', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(instant);
       expect(clock(shop.timeZone), 'the shop and the screen are in different zones').not.toBe(clock(screenZone));
-      let boardId: string | undefined;
-      try {
-        const board = await createStationAsAdmin(page.request, admin, { kind: 'board' });
-        boardId = board.id;
-        await page.clock.setFixedTime(instant);
-        await pairBoard(page, board.pairingCode);
+      await page.clock.setFixedTime(instant);
+      await pairNewBoard(admin);
 
-        await expect(page.getByRole('banner').getByText(clock(shop.timeZone), { exact: true })).toBeVisible();
-      } finally {
-        await removeBoardStation(db, boardId);
-      }
+      await expect(page.getByRole('banner').getByText(clock(shop.timeZone), { exact: true })).toBeVisible();
     });
   });
 });
 
 test.describe('the web app’s shop floor', () => {
-  test('shows a tag-out on the machine’s nameplate as it happens, without a reload', async ({ page, request, db, signInAs, createUser }) => {
-    const machine = await createMachine(db, { name: `Knee mill ${suffix()}`, category: 'mill' });
+  boardTest('shows a tag-out on the machine’s nameplate as it happens, without a reload', async ({ page, request, signInAs, createUser, floorMachine }) => {
+    const machine = await floorMachine('Knee mill', 'mill');
     const reporter = await createUser({ role: 'member' });
-    try {
-      await signInAs('member');
-      await page.goto('/');
-      const plate = page.getByRole('article', { name: machine.name });
-      await expect(plate).toContainText('Available');
-      await expect(page.getByRole('status').filter({ hasText: 'Live' })).toBeVisible();
+    await signInAs('member');
+    await page.goto('/');
+    const plate = page.getByRole('article', { name: machine.name });
+    await expect(plate).toContainText('Available');
+    await expect(page.getByRole('status').filter({ hasText: 'Live' })).toBeVisible();
 
-      const reason = 'Quill feed slips under load';
-      const tagged = await request.post(`/api/machines/${machine.id}/tag-out`, { headers: await signedIn(request, reporter), data: { reason } });
-      expect(tagged.status()).toBe(201);
+    const reason = 'Quill feed slips under load';
+    const tagged = await request.post(`/api/machines/${machine.id}/tag-out`, { headers: await signedIn(request, reporter), data: { reason } });
+    expect(tagged.status()).toBe(201);
 
-      await expect(plate).toContainText('Tagged out');
-      await expect(plate).toContainText(reason);
-      await expectNoWcagViolations(page);
-    } finally {
-      await db('machines').where({ id: machine.id }).delete();
-      await db('areas').where({ id: machine.area_id }).delete();
-    }
+    await expect(plate).toContainText('Tagged out');
+    await expect(plate).toContainText(reason);
+    await expectNoWcagViolations(page);
   });
 });
 

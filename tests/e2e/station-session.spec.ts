@@ -1,5 +1,7 @@
 import { hashPassword } from '@chuckkey/db';
-import { createBadge, createMachine, createSignOff, createTraining } from '@chuckkey/db/factories';
+import { createBadge, createMachine, createSignOff, createTraining, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
+import type { Page } from '@playwright/test';
+import type { Knex } from 'knex';
 import { expectNoWcagViolations } from './axe';
 import { expect, test } from './fixtures';
 import { openShopForEachTest } from './shop-hours';
@@ -10,6 +12,39 @@ const safetyChecklist = [
   { id: 'work-is-tight', label: 'The work is tight in the chuck and the chuck key is out' },
 ];
 
+/**
+ * A member with a badge and the waiver in force, at the machine's station once `pair` has paired
+ * the page. `cleanUp` removes what was made for the test: its sessions, the waiver record (and a
+ * waiver published for it), sign-offs, the station, the machine and the trainings.
+ */
+async function memberAtStation(
+  page: Page,
+  db: Knex,
+  people: { admin: CreatedMember; member: CreatedMember; others?: CreatedMember[] },
+  machine: MachineRow,
+  trainings: { id: string }[],
+) {
+  const badge = await createBadge(db, { memberId: people.member.id, badgeSecret: badgeSecret() });
+  const waiver = await withCurrentWaiver(db, people.member);
+  let stationId: string | undefined;
+  return {
+    badge,
+    async pair() {
+      const station = await createStationAsAdmin(page.request, people.admin, machine.id);
+      stationId = station.id;
+      await pairScreen(page, station.pairingCode);
+    },
+    async cleanUp() {
+      await db('machine_sessions').where({ machine_id: machine.id }).delete();
+      await db('waiver_records').where({ member_id: people.member.id }).delete();
+      if (waiver) await db('waiver_versions').where({ version: waiver }).delete();
+      const everyone = [people.admin, people.member, ...(people.others ?? [])].map((person) => person.id);
+      await removeStationRows(db, { people: everyone, stationId, machine });
+      await db('trainings').whereIn('id', trainings.map((training) => training.id)).delete();
+    },
+  };
+}
+
 test.describe('a machine station checks clearance and runs a session', () => {
   // Clearance needs the shop open; the database may be the demo shop's, with its hours.
   openShopForEachTest(test);
@@ -19,15 +54,11 @@ test.describe('a machine station checks clearance and runs a session', () => {
     const member = await createUser({ role: 'member', first_name: 'Ottoline' });
     const machine = await createMachine(db, { name: `Toolroom lathe ${Date.now() % 100_000}`, category: 'lathe' });
     const training = await createTraining(db, { name: `Lathe basics ${Date.now() % 100_000}`, machine_ids: [machine.id] });
-    const badge = await createBadge(db, { memberId: member.id, badgeSecret: badgeSecret() });
-    const waiver = await withCurrentWaiver(db, member);
-    let stationId: string | undefined;
+    const at = await memberAtStation(page, db, { admin, member }, machine, [training]);
     try {
-      const station = await createStationAsAdmin(page.request, admin, machine.id);
-      stationId = station.id;
-      await pairScreen(page, station.pairingCode);
+      await at.pair();
 
-      await typeBadge(page, badge.code);
+      await typeBadge(page, at.badge.code);
 
       await expect(page.getByRole('heading', { name: 'Hello, Ottoline' })).toBeVisible();
       await expect(page.getByText('Not cleared to start yet')).toBeVisible();
@@ -42,10 +73,7 @@ test.describe('a machine station checks clearance and runs a session', () => {
       await page.getByRole('button', { name: 'Done' }).click();
       await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
     } finally {
-      await db('waiver_records').where({ member_id: member.id }).delete();
-      if (waiver) await db('waiver_versions').where({ version: waiver }).delete();
-      await removeStationRows(db, { people: [admin.id, member.id], stationId, machine });
-      await db('trainings').where({ id: training.id }).delete();
+      await at.cleanUp();
     }
   });
 
@@ -62,15 +90,11 @@ test.describe('a machine station checks clearance and runs a session', () => {
     for (const training of trainings) {
       await createSignOff(db, { member_id: member.id, training_id: training.id, signed_by: instructor.id, level: 'independent' });
     }
-    const badge = await createBadge(db, { memberId: member.id, badgeSecret: badgeSecret() });
-    const waiver = await withCurrentWaiver(db, member);
-    let stationId: string | undefined;
+    const at = await memberAtStation(page, db, { admin, member, others: [instructor] }, machine, trainings);
     try {
-      const station = await createStationAsAdmin(page.request, admin, machine.id);
-      stationId = station.id;
-      await pairScreen(page, station.pairingCode);
+      await at.pair();
 
-      await typeBadge(page, badge.code);
+      await typeBadge(page, at.badge.code);
       await expect(page.getByRole('heading', { name: 'Hello, Peregrine' })).toBeVisible();
       await expect(page.getByText('Cleared to start')).toBeVisible();
       await page.getByRole('button', { name: 'Continue to safety check' }).click();
@@ -97,7 +121,7 @@ test.describe('a machine station checks clearance and runs a session', () => {
       await expect(page.getByText('Peregrine is on this machine')).toBeVisible();
 
       // The member's own badge while the session runs offers to end it.
-      await typeBadge(page, badge.code);
+      await typeBadge(page, at.badge.code);
       await expect(page.getByText('Your session is running')).toBeVisible();
       await expect(page.getByRole('button', { name: 'End session' })).toBeVisible();
       await page.getByRole('button', { name: 'Not now' }).click();
@@ -121,11 +145,7 @@ test.describe('a machine station checks clearance and runs a session', () => {
       await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
       await expect(page.getByText('Available')).toBeVisible();
     } finally {
-      await db('machine_sessions').where({ machine_id: machine.id }).delete();
-      await db('waiver_records').where({ member_id: member.id }).delete();
-      if (waiver) await db('waiver_versions').where({ version: waiver }).delete();
-      await removeStationRows(db, { people: [admin.id, instructor.id, member.id], stationId, machine });
-      await db('trainings').whereIn('id', trainings.map((t) => t.id)).delete();
+      await at.cleanUp();
     }
   });
 
