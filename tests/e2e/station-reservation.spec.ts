@@ -1,3 +1,4 @@
+import { dayRailBounds } from '@chuckkey/core';
 import { createBadge, createMachine, createSignOff, createTraining } from '@chuckkey/db/factories';
 import { expectNoWcagViolations } from './axe';
 import { expect, test } from './fixtures';
@@ -66,6 +67,8 @@ test.describe('a machine station and its reservations', () => {
       await page.reload();
       await expect(page.getByText('Thaddeus is on this machine')).toBeVisible();
       await expect(page.getByRole('alert').filter({ hasText: 'Rosalind has reserved this machine from' })).toBeVisible();
+      // screens.md, running screen: the time bar of the day shows when the next reservation starts.
+      await expect(page.getByRole('figure', { name: 'Today on this machine' })).toContainText('Next reservation: Rosalind');
       await expectNoWcagViolations(page);
     } finally {
       await db('machine_sessions').where({ machine_id: machine.id }).delete();
@@ -74,6 +77,41 @@ test.describe('a machine station and its reservations', () => {
       if (waiver) await db('waiver_versions').where({ version: waiver }).delete();
       await removeStationRows(db, { people: [admin.id, instructor.id, holder.id, other.id], stationId, machine });
       await db('trainings').where({ id: training.id }).delete();
+    }
+  });
+
+  test('the idle station shows the next reservation on the day’s time bar, with its time in words', async ({ page, db, createUser }) => {
+    const admin = await createUser({ role: 'admin' });
+    const holder = await createUser({ role: 'member', first_name: 'Rosalind' });
+    const machine = await createMachine(db, { name: `MIG welder ${Date.now() % 100_000}`, category: 'mig_welder' });
+    const { timeZone } = (await db('shop').first('time_zone as timeZone')) as { timeZone: string };
+    // A checked-in reservation that began a minute ago and reaches at least an hour into today's
+    // 06:00–24:00 rail (screens.md "Time bars"), whatever the hour the test runs at.
+    const now = Date.now();
+    const rail = dayRailBounds(new Date(now), timeZone);
+    const startsAt = new Date(Math.floor((now - MINUTE) / MINUTE) * MINUTE);
+    const endsAt = new Date(Math.max(startsAt.getTime() + 60 * MINUTE, rail.start.getTime() + 60 * MINUTE));
+    await db('reservations').insert({ machine_id: machine.id, member_id: holder.id, starts_at: startsAt, ends_at: endsAt, blocked_until: endsAt, status: 'checked_in', checked_in_at: startsAt });
+    // Wall-clock times in the shop's zone, from the IANA tz database via Intl.
+    const clock = new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+    const times = `${clock.format(startsAt)}–${clock.format(endsAt)}`;
+    let stationId: string | undefined;
+    try {
+      const station = await createStationAsAdmin(page.request, admin, machine.id);
+      stationId = station.id;
+      await pairScreen(page, station.pairingCode);
+
+      const bar = page.getByRole('banner').getByRole('figure', { name: 'Today on this machine' });
+      await expect(bar).toBeVisible();
+      await expect(bar.getByText(`Next reservation: Rosalind, ${times}`)).toBeVisible();
+      await expect(bar.getByTestId('time-bar-span')).toHaveCount(1);
+      await expect(bar.getByTestId('time-bar-span')).toBeVisible();
+      // The bar's text equivalent for screen readers.
+      await expect(bar.getByRole('listitem')).toHaveText([`Reserved ${times}, Rosalind`]);
+      await expectNoWcagViolations(page);
+    } finally {
+      await db('reservations').where({ machine_id: machine.id }).delete();
+      await removeStationRows(db, { people: [admin.id, holder.id], stationId, machine });
     }
   });
 });

@@ -21,6 +21,7 @@ import { stationsRoutes } from './modules/stations/stations.routes';
 import { tagOutsRoutes } from './modules/tag-outs/tag-outs.routes';
 import { badgesRoutes } from './modules/badges/badges.routes';
 import { boardRoutes } from './modules/board/board.routes';
+import { classesRoutes } from './modules/classes/classes.routes';
 import { waiversRoutes } from './modules/waivers/waivers.routes';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { machinesRoutes } from './modules/machines/machines.routes';
@@ -79,6 +80,7 @@ export function createApp(deps: Deps) {
   api.use(machinesRoutes(deps));
   api.use(tagOutsRoutes(deps));
   api.use('/board', boardRoutes(deps));
+  api.use('/classes', classesRoutes(deps));
   api.use(signOffsRoutes(deps));
   api.use(reservationsRoutes(deps));
   api.use(apiNotFound);

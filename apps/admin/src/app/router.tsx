@@ -32,6 +32,8 @@ export function createAppRouter() {
             { path: paths.myRecord.path, lazy: page(() => import('./routes/my-record')) },
             { path: paths.profile.path, lazy: page(() => import('./routes/profile')) },
             { path: paths.teach.path, lazy: page(() => import('./routes/teach')) },
+            { path: paths.teachClasses.path, lazy: page(() => import('./routes/teach-classes')) },
+            { path: paths.teachClass.path, lazy: page(() => import('./routes/teach-class')) },
             { path: paths.memberRecord.path, lazy: page(() => import('./routes/member-record')) },
             { path: paths.people.path, lazy: page(() => import('./routes/people')) },
             { path: paths.signOffReport.path, lazy: page(() => import('./routes/sign-off-report')) },

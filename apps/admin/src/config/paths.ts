@@ -18,6 +18,11 @@ export const paths = {
   reserve: { path: '/reserve', getHref: (machineId?: string) => withQuery('/reserve', { machine: machineId }) },
   myRecord: { path: '/my-record', getHref: () => '/my-record' },
   teach: { path: '/teach', getHref: () => '/teach' },
+  teachClasses: { path: '/teach/classes', getHref: () => '/teach/classes' },
+  teachClass: {
+    path: '/teach/classes/:classId',
+    getHref: (classId: string) => `/teach/classes/${encodeURIComponent(classId)}`,
+  },
   memberRecord: {
     path: '/teach/members/:memberId',
     getHref: (memberId: string) => `/teach/members/${encodeURIComponent(memberId)}`,

@@ -11,7 +11,7 @@ import { loadConfig, type Config } from '../config';
 import { createDb, type Db } from '../lib/db';
 import { createLogger } from '../lib/logger';
 import { createMailer } from '../lib/mailer';
-import { quietPublisher } from '../realtime/publisher';
+import { quietPublisher, type Publisher } from '../realtime/publisher';
 
 export function testConfig(overrides: Record<string, string> = {}): Config {
   return loadConfig({
@@ -36,13 +36,18 @@ export interface TestContext {
   close(): Promise<void>;
 }
 
-/** An in-process app on the test database. Call close() in afterAll. */
-export function createTestContext(overrides: Record<string, string> = {}): TestContext {
+/** A publisher that sends nothing and notes each machine it is told changed, in order, in `changed`. */
+export function recordingPublisher(changed: string[]): Publisher {
+  return { ...quietPublisher, machineChanged: (machineId) => changed.push(machineId) };
+}
+
+/** An in-process app on the test database (quiet live updates unless `live` is given). Call close() in afterAll. */
+export function createTestContext(overrides: Record<string, string> = {}, { live = quietPublisher }: { live?: Publisher } = {}): TestContext {
   const config = testConfig(overrides);
   const logger = createLogger(process.env.TEST_LOG_LEVEL ?? 'silent');
   const db = createDb(config.DATABASE_URL, logger, 5);
   const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM, logger);
-  const { app, close } = createApp({ config, db, logger, mailer, live: quietPublisher });
+  const { app, close } = createApp({ config, db, logger, mailer, live });
   return {
     app,
     db,

@@ -21,7 +21,12 @@ export const auditActions = [
   'reservation.created',
   'reservation.cancelled',
   'reservation.no_show',
+  'reservation.released',
   'machine.reservation_rules_changed',
+  'class.created',
+  'class.members_changed',
+  'class.cancelled',
+  'class.occurrence_cancelled',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

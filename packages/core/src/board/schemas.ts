@@ -36,11 +36,16 @@ export const boardAreaSchema = z.object({
 });
 export type BoardArea = z.infer<typeof boardAreaSchema>;
 
-/** A sign-off class coming up; the list stays empty until the shop schedules classes. */
+/**
+ * A class meeting coming up: `id` is the meeting's own (a weekly class has one per week, so two may
+ * be on the board at once), `classId` the class it belongs to.
+ */
 export const boardClassSchema = z.object({
   id: z.uuid(),
   name: z.string(),
   startsAt: instant,
+  classId: z.uuid().optional(),
+  machineName: z.string().optional(),
 });
 export type BoardClass = z.infer<typeof boardClassSchema>;
 

@@ -49,6 +49,8 @@ export const permissions = [
   'create:reservation:own',
   'cancel:reservation:own',
   'cancel:reservation:any',
+  'manage:class:any',
+  'cancel:class:any',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -81,6 +83,9 @@ const instructorPermissions: readonly Permission[] = [
   'read:photo:any',
   // Their own tag-outs only: the machine's fault was theirs to judge, and is theirs to judge fixed.
   'clear:tag-out:own',
+  // They hold machines for the classes they teach and book members in; cancelling one is its holder's
+  // call (or an admin's, through 'cancel:class:any').
+  'manage:class:any',
 ];
 
 export const permissionsByRole: Record<Role, readonly Permission[]> = {

@@ -151,9 +151,10 @@ function wallMinutes(instant: Date, timeZone: string): number {
 /**
  * Why the request falls outside the shop's hours, or null. It must lie inside one opening of its
  * start's day, compared on the wall clock so that 9:00–11:00 on a day the clocks change is
- * 9:00–11:00. With no hours set the shop is open at all times, closures apart.
+ * 9:00–11:00. With no hours set the shop is open at all times, closures apart. Class holds are
+ * bounded by the same rule, each meeting on its own day.
  */
-function outsideHours(facts: ReservationFacts, request: ReservationRequest): string | null {
+export function outsideHours(facts: Pick<ReservationFacts, 'timeZone' | 'hours'>, request: ReservationRequest): string | null {
   const { weekly, closures } = facts.hours;
   const { timeZone } = facts;
   const startDate = shopDate(request.start, timeZone);

@@ -70,6 +70,8 @@ export type Reservation = z.infer<typeof reservationSchema>;
 export const myReservationSchema = reservationSchema.extend({
   machineName: z.string(),
   kind: z.enum(reservationKinds),
+  /** The class's title for a class meeting (one the member holds or is booked into), else null; the server always sends it. */
+  classTitle: z.string().nullish(),
 });
 export type MyReservation = z.infer<typeof myReservationSchema>;
 
@@ -99,6 +101,8 @@ export const takenRangeSchema = z.object({
   end: z.string(),
   blockedUntil: z.string(),
   kind: z.enum(reservationKinds),
+  /** A class hold's class title (classes are public, as on the wall board); absent for members' reservations. */
+  title: z.string().nullish(),
 });
 export type TakenRange = z.infer<typeof takenRangeSchema>;
 
@@ -155,6 +159,10 @@ export type MachineReservationRules = z.infer<typeof machineReservationRulesSche
 /** POST /api/profile/calendar-feed: the private feed address, answered once. */
 export const calendarFeedCreatedSchema = z.object({ url: z.url() });
 export type CalendarFeedCreated = z.infer<typeof calendarFeedCreatedSchema>;
+
+/** Whether the member has a feed and since when; its address is never given again (only its hash is kept). */
+export const calendarFeedStatusSchema = z.object({ exists: z.boolean(), createdAt: z.string().nullable() });
+export type CalendarFeedStatus = z.infer<typeof calendarFeedStatusSchema>;
 
 /** GET /api/calendar/:token.ics: the feed's secret, as the server makes them (URL-safe base64). */
 export const calendarFeedParamsSchema = z.object({

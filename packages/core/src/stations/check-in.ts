@@ -94,6 +94,10 @@ export const stationStateSchema = z.object({
   supervisorOnDuty: z.object({ firstName: z.string() }).nullable(),
   // memberId lets the running screen tell the running member's own reservation from someone else's.
   nextReservation: z.object({ startsAt: z.string(), endsAt: z.string(), memberId: z.uuid(), memberFirstName: z.string() }).nullable().optional(),
+  // The machine's live reservations touching today's day rail (06:00–24:00 in the shop's zone), for its time bar.
+  today: z
+    .array(z.object({ startsAt: z.string(), endsAt: z.string(), kind: z.enum(['member', 'class']), memberFirstName: z.string() }))
+    .optional(),
 });
 export type StationState = z.infer<typeof stationStateSchema>;
 

@@ -7,18 +7,14 @@ import { Spinner } from '../../components/ui/spinner';
 import { cn } from '../../components/ui/cn';
 import { paths } from '../../config/paths';
 import { useMachines } from '../../features/machines/api/get-machines';
-import { useCancelReservation } from '../../features/reservations/api/cancel-reservation';
-import { useMyReservations } from '../../features/reservations/api/get-my-reservations';
 import { MachineWeek } from '../../features/reservations/components/machine-week';
-import { MyReservationsList } from '../../features/reservations/components/my-reservations';
+import { MyReservationsPanel } from '../../features/reservations/components/my-reservations-panel';
 import { useShop } from '../../features/shop/api/get-shop';
 
 export default function ReserveRoute() {
   const [searchParams] = useSearchParams();
   const machines = useMachines();
   const shop = useShop();
-  const mine = useMyReservations();
-  const cancel = useCancelReservation();
   const timeZone = shop.data?.timeZone;
   const reservable = (machines.data ?? []).filter((machine) => machine.reservable);
   const chosenId = searchParams.get('machine');
@@ -61,15 +57,7 @@ export default function ReserveRoute() {
 
         {chosen && timeZone && <MachineWeek key={chosen.id} machine={chosen} timeZone={timeZone} />}
 
-        <Panel title="My reservations">
-          {mine.isError ? (
-            <QueryError error={mine.error} what="your reservations" onRetry={() => void mine.refetch()} />
-          ) : !mine.data || !timeZone ? (
-            <Spinner label="Loading your reservations…" />
-          ) : (
-            <MyReservationsList reservations={mine.data} timeZone={timeZone} onCancel={(id) => cancel.mutateAsync(id)} />
-          )}
-        </Panel>
+        <MyReservationsPanel timeZone={timeZone} />
       </div>
     </>
   );

@@ -1,5 +1,6 @@
 import { can } from '@chuckkey/core';
 import { Link } from 'react-router-dom';
+import { ButtonLink } from '../../components/ui/button';
 import { EmptyState } from '../../components/ui/empty-state';
 import { PageHeading } from '../../components/ui/page-heading';
 import { Panel } from '../../components/ui/panel';
@@ -42,7 +43,11 @@ export default function TeachRoute() {
 
   return (
     <>
-      <PageHeading title="Teach" description="Sign members off after their practical check, and look up what they hold." />
+      <PageHeading
+        title="Teach"
+        description="Sign members off after their practical check, and look up what they hold."
+        actions={<ButtonLink to={paths.teachClasses.getHref()}>Classes</ButtonLink>}
+      />
       <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <Panel title="Sign off a member" description="Find the member, choose the training, tick what you saw, choose the level.">
           {form}

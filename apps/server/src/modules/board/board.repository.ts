@@ -22,7 +22,11 @@ export interface BoardRow {
   closures: ClosureDays[];
   supervisor: { firstName: string; lastName: string } | null;
   areas: { id: string; name: string; machines: MachineTileRow[] }[];
+  classes: { id: string; classId: string; title: string; startsAt: string; machineName: string }[];
 }
+
+/** The most class meetings the board's footer lists. */
+export const BOARD_CLASSES = 6;
 
 /*
  * Per machine: its open tag-out (at most one, by a unique index), its running session with the
@@ -96,7 +100,26 @@ select
       from tiles t where t.area_id = a.id
     ) area
     where area.machines is not null
-  ) as areas
+  ) as areas,
+  (
+    -- Class meetings not yet over that start by the end of the seventh day after the shop's today.
+    select coalesce(json_agg(json_build_object(
+      'id', meeting.id, 'classId', meeting.class_id, 'title', meeting.title, 'startsAt', meeting.starts_at, 'machineName', meeting.machine_name)
+      order by meeting.starts_at), '[]')
+    from (
+      select r.id, r.class_id, c.title, r.starts_at, m.name as machine_name
+      from reservations r
+      join classes c on c.id = r.class_id and c.cancelled_at is null
+      join machines m on m.id = r.machine_id
+      -- A meeting lasts at most a day (classCreateSchema), so the start's lower bound keeps the
+      -- index scan off the past meetings, which stay active: no job releases class holds.
+      where r.class_id is not null and r.status in ('active', 'checked_in') and r.ends_at > now()
+        and r.starts_at > now() - interval '1 day'
+        and r.starts_at < (select (date_trunc('day', now() at time zone time_zone) + interval '8 days') at time zone time_zone from shop where id = 1)
+      order by r.starts_at
+      limit ${BOARD_CLASSES}
+    ) meeting
+  ) as classes
 `;
 
 const MACHINE_TILE_SQL = `

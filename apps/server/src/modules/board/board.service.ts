@@ -67,8 +67,13 @@ export function boardService({ db }: { db: Db }) {
         },
         supervisorOnDuty: row.supervisor ? { firstName: row.supervisor.firstName, lastInitial: lastInitial(row.supervisor.lastName) } : null,
         areas: row.areas.map((area) => ({ id: area.id, name: area.name, machines: area.machines.map((machine) => toTile(machine, now)) })),
-        // Sign-off classes are not scheduled yet, so none is coming up.
-        classes: [],
+        classes: row.classes.map((meeting) => ({
+          id: meeting.id,
+          classId: meeting.classId,
+          name: meeting.title,
+          startsAt: new Date(meeting.startsAt).toISOString(),
+          machineName: meeting.machineName,
+        })),
       };
     },
 

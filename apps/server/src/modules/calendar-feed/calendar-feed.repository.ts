@@ -5,7 +5,7 @@ import type { ReservationMailRecord } from '../reservations/reservations.reposit
 export type FeedReservation = Pick<
   ReservationMailRecord,
   'id' | 'startsAt' | 'endsAt' | 'status' | 'machineName' | 'memberEmail' | 'memberFirstName' | 'memberLastName'
-> & { status: ReservationStatus };
+> & { status: ReservationStatus; classTitle: string | null };
 
 export function calendarFeedRepository(db: Db) {
   return {
@@ -15,6 +15,12 @@ export function calendarFeedRepository(db: Db) {
         .insert({ member_id: memberId, token_hash: tokenHash })
         .onConflict('member_id')
         .merge({ token_hash: tokenHash, created_at: db.fn.now() });
+    },
+
+    /** When the member's current feed secret was made, or undefined when they have none. */
+    async createdAt(memberId: string): Promise<Date | undefined> {
+      const row = await db('calendar_feeds').where({ member_id: memberId }).first<{ createdAt: Date } | undefined>({ createdAt: 'created_at' });
+      return row?.createdAt;
     },
 
     async remove(memberId: string): Promise<boolean> {
@@ -30,12 +36,18 @@ export function calendarFeedRepository(db: Db) {
       return row?.memberId;
     },
 
-    /** The member's reservations starting on or after `since`, soonest first, at most `limit`. */
+    /**
+     * The member's reservations and the meetings of classes they are booked into, starting on or
+     * after `since`, soonest first, at most `limit`. The feed's member is every entry's attendee.
+     */
     async reservations(memberId: string, since: Date, limit: number): Promise<FeedReservation[]> {
       return db('reservations as r')
         .join('machines as m', 'm.id', 'r.machine_id')
-        .join('members as p', 'p.id', 'r.member_id')
-        .where('r.member_id', memberId)
+        .join('members as p', (on) => on.onVal('p.id', memberId))
+        .leftJoin('classes as c', 'c.id', 'r.class_id')
+        .where((mine) => {
+          mine.where('r.member_id', memberId).orWhereIn('r.class_id', db('class_members').where({ member_id: memberId }).select('class_id'));
+        })
         .where('r.starts_at', '>=', since)
         .orderBy('r.starts_at')
         .limit(limit)
@@ -48,6 +60,7 @@ export function calendarFeedRepository(db: Db) {
           memberEmail: 'p.email',
           memberFirstName: 'p.first_name',
           memberLastName: 'p.last_name',
+          classTitle: 'c.title',
         });
     },
   };

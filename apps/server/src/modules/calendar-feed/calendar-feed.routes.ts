@@ -2,13 +2,20 @@ import { Router } from 'express';
 import { calendarFeedParamsSchema } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
 import { parse } from '../../lib/validate';
-import { currentUser, requirePermission } from '../../middleware/auth';
+import { currentUser, requirePermission, requireUser } from '../../middleware/auth';
 import { calendarFeedService } from './calendar-feed.service';
 
-/** The member's own feed address: made, replaced and turned off while signed in. */
+/**
+ * The member's own feed address: whether there is one (for the web app after a reload), made,
+ * replaced and turned off while signed in.
+ */
 export function calendarFeedProfileRoutes(deps: Deps): Router {
   const service = calendarFeedService(deps);
   const router = Router();
+
+  router.get('/', requireUser, async (req, res) => {
+    res.set('Cache-Control', 'no-store').json(await service.status(currentUser(req).id));
+  });
 
   router.post('/', requirePermission('update:profile:own'), async (req, res) => {
     res.status(201).set('Cache-Control', 'no-store').json(await service.create(currentUser(req).id));

@@ -1,4 +1,4 @@
-import { calendarFeed, type ReservationStatus } from '@chuckkey/core';
+import { calendarFeed, type CalendarFeedStatus, type ReservationStatus } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
 import { notFound } from '../../lib/errors';
 import { hashToken, randomToken } from '../../lib/tokens';
@@ -24,6 +24,12 @@ export function calendarFeedService({ config, db }: Deps) {
       const token = randomToken();
       await feeds.put(memberId, hashToken(token));
       return { url: `${config.publicUrl}/api/calendar/${token}.ics` };
+    },
+
+    /** Whether a feed exists: the web app cannot show the address again, only that one is live and since when. */
+    async status(memberId: string): Promise<CalendarFeedStatus> {
+      const createdAt = await feeds.createdAt(memberId);
+      return { exists: createdAt !== undefined, createdAt: createdAt?.toISOString() ?? null };
     },
 
     async revoke(memberId: string): Promise<void> {

@@ -1,24 +1,16 @@
 import ICAL from 'ical.js';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { calendarFeedCreatedSchema } from '@chuckkey/core';
+import { calendarFeedCreatedSchema, calendarFeedStatusSchema } from '@chuckkey/core';
 import { createMachine } from '@chuckkey/db/factories';
 import { browser, createTestContext, signedIn, type TestContext } from '../../test/harness';
+import { slot } from '../../test/slots';
 
 let ctx: TestContext;
 beforeAll(() => {
   ctx = createTestContext();
 });
 afterAll(() => ctx.close());
-
-const HOUR = 3_600_000;
-const DAY = 24 * HOUR;
-
-function slot(days: number, hours: number): Date {
-  const midnight = new Date();
-  midnight.setUTCHours(0, 0, 0, 0);
-  return new Date(midnight.getTime() + days * DAY + hours * HOUR);
-}
 
 /** The feed's path on this server, from the URL the member was given. */
 const pathOf = (url: string) => new URL(url).pathname;
@@ -78,5 +70,45 @@ describe('a member’s calendar feed', () => {
   it('needs a sign-in to make one', async () => {
     const anonymous = await browser(ctx);
     expect((await anonymous.post('/api/profile/calendar-feed')).status).toBe(401);
+  });
+});
+
+describe('GET /api/profile/calendar-feed', () => {
+  const status = async (client: Awaited<ReturnType<typeof signedIn>>) => {
+    const res = await client.get('/api/profile/calendar-feed');
+    expect(res.status).toBe(200);
+    expect(res.headers['cache-control']).toBe('no-store');
+    return calendarFeedStatusSchema.parse(res.body);
+  };
+
+  it('says whether the member has a feed and since when, never its address, through a new link and turning it off', async () => {
+    const member = await signedIn(ctx, 'member');
+    const other = await signedIn(ctx, 'member');
+    expect(await status(member)).toEqual({ exists: false, createdAt: null });
+
+    const before = Date.now();
+    const { url } = calendarFeedCreatedSchema.parse((await member.post('/api/profile/calendar-feed')).body);
+    const made = await status(member);
+    expect(made.exists).toBe(true);
+    const madeAt = new Date(made.createdAt!).getTime();
+    // The database's clock and the test's may differ by a little; a second either way is plenty.
+    expect(madeAt).toBeGreaterThanOrEqual(before - 1000);
+    expect(madeAt).toBeLessThanOrEqual(Date.now() + 1000);
+    // Only the secret's hash is stored, so the answer cannot and does not carry the address.
+    expect(JSON.stringify(made)).not.toContain(pathOf(url));
+    // Someone else's feed is no part of another member's answer.
+    expect(await status(other)).toEqual({ exists: false, createdAt: null });
+
+    await ctx.db('calendar_feeds').where({ member_id: member.member.id }).update({ created_at: new Date(madeAt - 60_000) });
+    expect((await member.post('/api/profile/calendar-feed')).status).toBe(201);
+    const replaced = await status(member);
+    expect(new Date(replaced.createdAt!).getTime()).toBeGreaterThan(madeAt - 60_000);
+
+    expect((await member.delete('/api/profile/calendar-feed')).status).toBe(204);
+    expect(await status(member)).toEqual({ exists: false, createdAt: null });
+  });
+
+  it('needs a sign-in', async () => {
+    expect((await (await browser(ctx)).get('/api/profile/calendar-feed')).status).toBe(401);
   });
 });

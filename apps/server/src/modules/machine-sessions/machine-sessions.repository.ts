@@ -21,7 +21,8 @@ export interface ScanFacts {
   /** The machine's open tag-out (rule 4). */
   taggedOut: { reason: string; since: Date } | null;
   member: { id: string; firstName: string; role: Role; active: boolean; waiverOnFile: boolean; hasPhoto: boolean } | null;
-  requiredTrainings: { id: string; name: string; teachers: string[] }[];
+  /** `nextClass`: the start of the soonest class meeting teaching the training, on any machine. */
+  requiredTrainings: { id: string; name: string; teachers: string[]; nextClass: Date | null }[];
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: Date | null; revokedAt: Date | null }[];
   supervisorOnDuty: { firstName: string } | null;
   runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: Date } | null;
@@ -43,6 +44,8 @@ export interface ScanReservation {
   startsAt: Date;
   endsAt: Date;
   status: 'active' | 'checked_in';
+  /** A class hold whose class the scanning member is booked into. */
+  bookedInClass: boolean;
 }
 
 export interface SessionRecord {
@@ -124,7 +127,20 @@ required as (
         order by tt.last_signed_at desc
         limit $4::int
       ) recent
-    ), '{}') as teachers
+    ), '{}') as teachers,
+    (
+      -- The soonest meeting still to start of any class teaching this training, on any machine:
+      -- per class, the first entry of the partial index of class meetings by start.
+      select min(next_meeting.starts_at)
+      from classes c
+      cross join lateral (
+        select r.starts_at from reservations r
+        where r.class_id = c.id and r.class_id is not null and r.status in ('active', 'checked_in') and r.starts_at > $5::timestamptz
+        order by r.starts_at
+        limit 1
+      ) next_meeting
+      where c.training_id = t.id and c.training_id is not null and c.cancelled_at is null
+    ) as "nextClassAt"
   from machine_trainings mt join trainings t on t.id = mt.training_id
   where mt.machine_id = (select id from machine) and t.active
 )
@@ -171,7 +187,11 @@ select
     -- this stays a probe of a few rows however many reservations the machine has had.
     select coalesce(json_agg(json_build_object(
       'id', r.id, 'memberId', r.member_id, 'memberFirstName', p.first_name,
-      'startsAt', r.starts_at, 'endsAt', r.ends_at, 'status', r.status) order by r.starts_at), '[]')
+      'startsAt', r.starts_at, 'endsAt', r.ends_at, 'status', r.status,
+      -- Whether the scanning member is booked into the class this hold is for (rule 6 lets them in).
+      'bookedInClass', r.class_id is not null and exists (
+        select 1 from class_members cm where cm.class_id = r.class_id and cm.member_id = (select id from holder))
+      ) order by r.starts_at), '[]')
     from machine mm
     join reservations r on r.machine_id = mm.id
     join members p on p.id = r.member_id
@@ -191,7 +211,7 @@ interface FactsRow {
   timeZone: string | null;
   machine: ScanFacts['machine'] | null;
   member: ScanFacts['member'];
-  requiredTrainings: ScanFacts['requiredTrainings'];
+  requiredTrainings: (Omit<ScanFacts['requiredTrainings'][number], 'nextClass'> & { nextClassAt: string | null })[];
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: string | null; revokedAt: string | null }[];
   supervisorOnDuty: ScanFacts['supervisorOnDuty'];
   runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: string } | null;
@@ -222,7 +242,7 @@ function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
     machine,
     taggedOut: row.taggedOut ? { reason: row.taggedOut.reason, since: new Date(row.taggedOut.since) } : null,
     member: row.member,
-    requiredTrainings: row.requiredTrainings,
+    requiredTrainings: row.requiredTrainings.map(({ nextClassAt, ...training }) => ({ ...training, nextClass: date(nextClassAt) })),
     signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),
     supervisorOnDuty: row.supervisorOnDuty,
     runningSession: row.runningSession ? { ...row.runningSession, startedAt: new Date(row.runningSession.startedAt) } : null,
@@ -304,7 +324,19 @@ export function machineSessionsRepository(db: Db) {
         .whereIn('r.status', ['active', 'checked_in'])
         .where('r.ends_at', '>', now)
         .orderBy('r.starts_at')) as ScanReservation | undefined;
-      return row;
+      return row ? { ...row, bookedInClass: false } : undefined;
+    },
+
+    /** The machine's live reservations overlapping [from, to), earliest first, with their holders' first names. */
+    async reservationsBetween(machineId: string, from: Date, to: Date): Promise<{ startsAt: Date; endsAt: Date; kind: 'member' | 'class'; memberFirstName: string }[]> {
+      return db('reservations as r')
+        .join('members as p', 'p.id', 'r.member_id')
+        .where('r.machine_id', machineId)
+        .whereIn('r.status', ['active', 'checked_in'])
+        .where('r.starts_at', '<', to)
+        .where('r.ends_at', '>', from)
+        .orderBy('r.starts_at')
+        .select({ startsAt: 'r.starts_at', endsAt: 'r.ends_at', kind: 'r.kind', memberFirstName: 'p.first_name' });
     },
 
     /** Fails with a unique violation when the machine already has a running session. */

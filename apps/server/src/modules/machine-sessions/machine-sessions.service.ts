@@ -1,6 +1,7 @@
 import {
   badgeCodeSchema,
   checkInOpen,
+  dayRailBounds,
   evaluateClearance,
   HEARTBEAT_SILENCE_MINUTES,
   OFFLINE_END_MAX_HOURS,
@@ -19,6 +20,8 @@ import { badgeCodeHash } from '@chuckkey/db';
 import type { Deps } from '../../lib/deps';
 import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
 import { badgesService } from '../badges/badges.service';
+import { releaseReservation } from '../reservations/reservation-release';
+import { reservationsRepository } from '../reservations/reservations.repository';
 import { grantToken, grantValid } from '../../lib/tokens';
 import { stationsRepository, type StationRecord } from '../stations/stations.repository';
 import { machineSessionsRepository, type EndedBy, type ScanFacts, type ScanReservation, type SessionRecord } from './machine-sessions.repository';
@@ -67,7 +70,7 @@ function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['memb
     machine: {
       id: facts.machine.id,
       name: facts.machine.name,
-      requiredTrainings: facts.requiredTrainings.map((t) => ({ id: t.id, name: t.name, teachers: t.teachers, nextClass: null })),
+      requiredTrainings: facts.requiredTrainings.map((t) => ({ id: t.id, name: t.name, teachers: t.teachers, nextClass: t.nextClass && { startsAt: t.nextClass } })),
       taggedOut: facts.taggedOut,
       overdueBlockingTasks: [],
       protectionMinutes: facts.machine.checkInMinutes,
@@ -77,8 +80,9 @@ function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['memb
     runningSession: facts.runningSession,
     // Only active and checked-in reservations are read, so none of them has been released. One
     // checked into holds the machine to its end; one not yet, to the end of its no-show grace.
+    // A member booked into a class counts its hold as their own, as its instructor does (rule 6).
     upcomingReservations: facts.reservations.map((r) => ({
-      memberId: r.memberId,
+      memberId: r.bookedInClass ? facts.member.id : r.memberId,
       startsAt: r.startsAt,
       released: false,
       heldUntil: r.status === 'checked_in' ? r.endsAt : new Date(r.startsAt.getTime() + facts.machine.noShowGraceMinutes * 60_000),
@@ -270,7 +274,14 @@ export function machineSessionsService(deps: Deps) {
           });
         }
         const clamped = endedAt.getTime() > now.getTime() ? now : endedAt;
-        return { ended: toEnded(await repo.end(session.id, { endedAt: clamped, endedBy, idempotencyKey: input.idempotencyKey })), changed: true };
+        const ended = toEnded(await repo.end(session.id, { endedAt: clamped, endedBy, idempotencyKey: input.idempotencyKey }));
+        // The holder who stops while their checked-in reservation still runs is done with it: the rest
+        // of the slot goes back to the shop. A supervisor stopping someone does not give their time away.
+        if (endedBy === 'member') {
+          const held = await reservationsRepository(trx).checkedInRunningForUpdate(machineId, session.memberId, clamped);
+          if (held) await releaseReservation(trx, held, session.memberId, clamped, 'session_end');
+        }
+        return { ended, changed: true };
       });
       // A replayed end changed nothing, so there is nothing to announce.
       if (changed) live.machineChanged(machineId);
@@ -282,7 +293,8 @@ export function machineSessionsService(deps: Deps) {
       const running = facts.runningSession;
       // The idle screen names the next reservation however far ahead it is, not only those the
       // scan looks at, so the state reads it on its own.
-      const next = await sessions.nextReservation(facts.machine.id, now);
+      const rail = dayRailBounds(now, facts.timeZone);
+      const [next, today] = await Promise.all([sessions.nextReservation(facts.machine.id, now), sessions.reservationsBetween(facts.machine.id, rail.start, rail.end)]);
       return {
         machine: { id: facts.machine.id, name: facts.machine.name, category: facts.machine.category, requiresPin: facts.machine.requiresPin },
         runningSession: running
@@ -292,6 +304,7 @@ export function machineSessionsService(deps: Deps) {
         nextReservation: next
           ? { startsAt: next.startsAt.toISOString(), endsAt: next.endsAt.toISOString(), memberId: next.memberId, memberFirstName: next.memberFirstName }
           : null,
+        today: today.map((r) => ({ startsAt: r.startsAt.toISOString(), endsAt: r.endsAt.toISOString(), kind: r.kind, memberFirstName: r.memberFirstName })),
       };
     },
 

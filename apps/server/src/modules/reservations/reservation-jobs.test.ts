@@ -3,9 +3,7 @@ import { createMachine, createMember } from '@chuckkey/db/factories';
 import type { Deps } from '../../lib/deps';
 import { createLogger } from '../../lib/logger';
 import { createMailer, type Mailer } from '../../lib/mailer';
-import type { Publisher } from '../../realtime/publisher';
-import { quietPublisher } from '../../realtime/publisher';
-import { caughtMail, countMail, createTestContext, ownDatabase, signedIn, type TestContext } from '../../test/harness';
+import { caughtMail, countMail, createTestContext, ownDatabase, recordingPublisher, signedIn, type TestContext } from '../../test/harness';
 import { reservationJobsService } from './reservation-jobs.service';
 
 let ctx: TestContext;
@@ -21,8 +19,7 @@ beforeAll(async () => {
   outbox = createTestContext();
   const logger = createLogger('silent');
   mailer = createMailer(ctx.config.SMTP_URL, ctx.config.MAIL_FROM, logger);
-  const live: Publisher = { ...quietPublisher, machineChanged: (id) => changed.push(id) };
-  deps = { config: ctx.config, db: ctx.db, logger, mailer, live };
+  deps = { config: ctx.config, db: ctx.db, logger, mailer, live: recordingPublisher(changed) };
 });
 afterAll(async () => {
   mailer.close();

@@ -4,25 +4,14 @@ import { createMachine } from '@chuckkey/db/factories';
 import { createApp } from '../../app';
 import { createLogger } from '../../lib/logger';
 import type { Mailer } from '../../lib/mailer';
-import type { Publisher } from '../../realtime/publisher';
-import { quietPublisher } from '../../realtime/publisher';
-import { caughtMailWithAttachments, countMail, createTestContext, signedIn, type TestContext } from '../../test/harness';
+import { caughtMailWithAttachments, countMail, createTestContext, recordingPublisher, signedIn, type TestContext } from '../../test/harness';
+import { slot } from '../../test/slots';
 
 let ctx: TestContext;
 beforeAll(() => {
   ctx = createTestContext();
 });
 afterAll(() => ctx.close());
-
-const HOUR = 3_600_000;
-const DAY = 24 * HOUR;
-
-/** An instant `days` after today's midnight in the test shop's time zone (UTC), at hh:00. */
-function slot(days: number, hours: number): Date {
-  const midnight = new Date();
-  midnight.setUTCHours(0, 0, 0, 0);
-  return new Date(midnight.getTime() + days * DAY + hours * HOUR);
-}
 
 const body = (machineId: string, start: Date, end: Date) => ({ machineId, start: start.toISOString(), end: end.toISOString() });
 
@@ -97,8 +86,7 @@ describe('reservation mail', () => {
       close() {},
     };
     const changed: string[] = [];
-    const live: Publisher = { ...quietPublisher, machineChanged: (id) => changed.push(id) };
-    const { app, close } = createApp({ config: ctx.config, db: ctx.db, logger: failingLogger, mailer: brokenMailer, live });
+    const { app, close } = createApp({ config: ctx.config, db: ctx.db, logger: failingLogger, mailer: brokenMailer, live: recordingPublisher(changed) });
     try {
       const machine = await createMachine(ctx.db, { category: 'mig_welder', reservable: true });
       const member = await signedIn({ ...ctx, app }, 'member');

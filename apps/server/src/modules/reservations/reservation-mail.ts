@@ -22,14 +22,17 @@ interface ShopForMail {
 }
 
 /** What a calendar entry of a reservation is written from. */
-export type CalendarEntrySource = Pick<ReservationMailRecord, 'id' | 'startsAt' | 'endsAt' | 'machineName' | 'memberEmail' | 'memberFirstName' | 'memberLastName'>;
+export type CalendarEntrySource = Pick<ReservationMailRecord, 'id' | 'startsAt' | 'endsAt' | 'machineName' | 'memberEmail' | 'memberFirstName' | 'memberLastName'> & {
+  /** A class meeting is entered under the class's title. */
+  classTitle?: string | null;
+};
 
 export function reservationCalendarEvent(row: CalendarEntrySource, shop: Omit<ShopForMail, 'timeZone'>, organizer: CalendarPerson, status: 'CONFIRMED' | 'CANCELLED'): ReservationEvent {
   return reservationEvent({
     uid: reservationUid(row.id),
     start: row.startsAt,
     end: row.endsAt,
-    summary: `${row.machineName} reserved`,
+    summary: row.classTitle ? `${row.classTitle} (${row.machineName})` : `${row.machineName} reserved`,
     location: `${shop.name}, ${shop.town}`,
     status,
     organizer,

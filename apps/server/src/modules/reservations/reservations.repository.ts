@@ -186,14 +186,43 @@ export function reservationsRepository(db: Db) {
       return row;
     },
 
-    /** The member's reservations with their machines' names, newest start first, at most `limit`. */
-    async ofMember(memberId: string, limit: number): Promise<(ReservationRecord & { machineName: string })[]> {
+    /** Gives the rest of a checked-in reservation back at `at`; call on a row locked in the same transaction. */
+    async release(id: string, at: Date): Promise<ReservationRecord> {
+      const [row] = await db('reservations')
+        .where({ id, status: 'checked_in' })
+        .update({ status: 'released', released_at: at })
+        .returning<ReservationRecord[]>(returning);
+      if (!row) throw new Error(`reservation ${id} was not checked in while locked`);
+      return row;
+    },
+
+    /**
+     * Locks the member's own checked-in reservation on the machine that has not ended at `at`, if
+     * there is one; a class hold is the shop's time, not the instructor's to give back.
+     */
+    async checkedInRunningForUpdate(machineId: string, memberId: string, at: Date): Promise<ReservationRecord | undefined> {
+      return db('reservations')
+        .first<ReservationRecord | undefined>(columns)
+        .where({ machine_id: machineId, member_id: memberId, status: 'checked_in', kind: 'member' })
+        .where('ends_at', '>', at)
+        .orderBy('starts_at')
+        .forUpdate();
+    },
+
+    /**
+     * The member's reservations, and the meetings of classes they are booked into, with the
+     * machines' names and the classes' titles, newest start first, at most `limit`.
+     */
+    async ofMember(memberId: string, limit: number): Promise<(ReservationRecord & { machineName: string; classTitle: string | null })[]> {
       return db('reservations as r')
         .join('machines as m', 'm.id', 'r.machine_id')
-        .where('r.member_id', memberId)
+        .leftJoin('classes as c', 'c.id', 'r.class_id')
+        .where((mine) => {
+          mine.where('r.member_id', memberId).orWhereIn('r.class_id', db('class_members').where({ member_id: memberId }).select('class_id'));
+        })
         .orderBy('r.starts_at', 'desc')
         .limit(limit)
-        .select({ ...Object.fromEntries(Object.entries(columns).map(([alias, column]) => [alias, `r.${column}`])), machineName: 'm.name' });
+        .select({ ...Object.fromEntries(Object.entries(columns).map(([alias, column]) => [alias, `r.${column}`])), machineName: 'm.name', classTitle: 'c.title' });
     },
 
     /**
@@ -295,14 +324,15 @@ export function reservationsRepository(db: Db) {
     },
 
     /** Live claims on the machine whose time with its buffer touches [from, to), earliest first. */
-    async taken(machineId: string, from: Date, to: Date): Promise<{ startsAt: Date; endsAt: Date; blockedUntil: Date; kind: ReservationKind }[]> {
-      return db('reservations')
-        .where({ machine_id: machineId })
-        .whereIn('status', LIVE)
-        .where('starts_at', '<', to)
-        .where('blocked_until', '>', from)
-        .orderBy('starts_at')
-        .select({ startsAt: 'starts_at', endsAt: 'ends_at', blockedUntil: 'blocked_until', kind: 'kind' });
+    async taken(machineId: string, from: Date, to: Date): Promise<{ startsAt: Date; endsAt: Date; blockedUntil: Date; kind: ReservationKind; classTitle: string | null }[]> {
+      return db('reservations as r')
+        .leftJoin('classes as c', 'c.id', 'r.class_id')
+        .where({ 'r.machine_id': machineId })
+        .whereIn('r.status', LIVE)
+        .where('r.starts_at', '<', to)
+        .where('r.blocked_until', '>', from)
+        .orderBy('r.starts_at')
+        .select({ startsAt: 'r.starts_at', endsAt: 'r.ends_at', blockedUntil: 'r.blocked_until', kind: 'r.kind', classTitle: 'c.title' });
     },
   };
 }

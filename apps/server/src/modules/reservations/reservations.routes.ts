@@ -41,6 +41,11 @@ export function reservationsRoutes(deps: Deps): Router {
     res.status(204).end();
   });
 
+  router.post('/reservations/:id/release', requireUser, async (req, res) => {
+    const { id } = parse(idParamsSchema, req.params, 'params');
+    res.json(await service.release(currentUser(req), id));
+  });
+
   router.get('/machines/:id/availability', requirePermission('read:machine:any'), async (req, res) => {
     const { id } = parse(idParamsSchema, req.params, 'params');
     const query = parse(availabilityQuerySchema, req.query, 'query');

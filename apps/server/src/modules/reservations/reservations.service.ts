@@ -17,10 +17,11 @@ import {
   type ReservationRulesInput,
 } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
-import { conflict, EXCLUSION_VIOLATION, notFound, pgCode } from '../../lib/errors';
+import { AppError, conflict, EXCLUSION_VIOLATION, notFound, pgCode } from '../../lib/errors';
 import { auditLog } from '../audit/audit.repository';
 import { shopRepository } from '../shop/shop.repository';
 import { reservationMail } from './reservation-mail';
+import { releaseReservation } from './reservation-release';
 import { reservationsRepository, type ReservationListRecord, type ReservationRecord } from './reservations.repository';
 
 const MINUTE = 60_000;
@@ -131,6 +132,8 @@ export function reservationsService(deps: Deps) {
         const mayCancel = row && (can(actor.role, 'cancel:reservation:any') || (row.memberId === actor.id && can(actor.role, 'cancel:reservation:own')));
         // Someone else's reservation reads as unknown: ids of others' reservations are never shown.
         if (!row || !mayCancel) throw reservationNotFound();
+        // A class meeting belongs to its class: cancelling it there keeps the class's record whole.
+        if (row.kind === 'class') throw conflict('class_meeting', 'This time is held for a class; cancel the meeting from the class instead.');
         if (row.status !== 'active' || row.endsAt.getTime() <= now.getTime()) {
           throw conflict('not_cancellable', 'Only a reservation that is still to come, and not checked into, can be cancelled.');
         }
@@ -149,13 +152,32 @@ export function reservationsService(deps: Deps) {
       await mail.send('cancellation', cancelled.id, now);
     },
 
+    /**
+     * The holder gives back the rest of a reservation they checked into, so others may reserve or
+     * walk up to the machine. Only the holder: the time is theirs to give, and an admin who wants
+     * it back cancels instead, before the check-in.
+     */
+    async release(actor: Express.User, id: string, now = new Date()): Promise<Reservation> {
+      const released = await db.transaction(async (trx) => {
+        const row = await reservationsRepository(trx).findForUpdate(id);
+        if (!row) throw notFound('reservation_not_found', 'There is no reservation with that id.');
+        if (row.memberId !== actor.id) throw new AppError(403, 'not_yours', 'Only the member who holds this reservation can release it.');
+        if (row.status !== 'checked_in' || row.endsAt.getTime() <= now.getTime()) {
+          throw conflict('not_releasable', 'Only a reservation you have checked into at the station, and that has not ended, can be released.');
+        }
+        return releaseReservation(trx, row, actor.id, now, 'web');
+      });
+      live.machineChanged(released.machineId);
+      return toReservation(released);
+    },
+
     /** Upcoming: live claims not yet over, soonest first. Past: everything else, latest first. */
     async mine(actor: Express.User, now = new Date()): Promise<MyReservations> {
       const rows = await reservationsRepository(db).ofMember(actor.id, MINE_LIMIT);
       const upcoming: MyReservation[] = [];
       const past: MyReservation[] = [];
       for (const row of rows) {
-        const item = { ...toReservation(row), machineName: row.machineName, kind: row.kind };
+        const item = { ...toReservation(row), machineName: row.machineName, kind: row.kind, classTitle: row.classTitle };
         const live = row.status === 'active' || row.status === 'checked_in';
         if (live && row.endsAt.getTime() > now.getTime()) upcoming.unshift(item);
         else past.push(item);
@@ -224,6 +246,7 @@ export function reservationsService(deps: Deps) {
           end: range.endsAt.toISOString(),
           blockedUntil: range.blockedUntil.toISOString(),
           kind: range.kind,
+          ...(range.classTitle ? { title: range.classTitle } : {}),
         })),
       };
     },

@@ -1,77 +1,36 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { reservationCheckedInSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
-import { createSignOff, createTraining, createWaiverVersion, recordWaiver } from '@chuckkey/db/factories';
-import { createApp } from '../../app';
-import { createLogger } from '../../lib/logger';
-import { createMailer } from '../../lib/mailer';
-import { quietPublisher, type Publisher } from '../../realtime/publisher';
-import { createTestContext, ownDatabase, type TestContext } from '../../test/harness';
-import { badgeHolder, pairedDevice, type BadgeHolder } from './station.fixtures';
+import { dayRailBounds, reservationCheckedInSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
+import { createWaiverVersion } from '@chuckkey/db/factories';
+import { createTestContext, ownDatabase, recordingPublisher, type TestContext } from '../../test/harness';
+import { pairedDevice, welderReservedByInes } from './station.fixtures';
 
 // Waiver versions and opening hours are shop-wide, so these tests run on a database of their own.
 let ctx: TestContext;
-let closeApp: () => Promise<void>;
 const changed: string[] = [];
 beforeAll(async () => {
-  const base = createTestContext({ DATABASE_URL: await ownDatabase('reservation_check_in') });
-  // The same app as the harness builds, with a publisher that records which machines changed.
-  const logger = createLogger('silent');
-  const mailer = createMailer(base.config.SMTP_URL, base.config.MAIL_FROM, logger);
-  const live: Publisher = { ...quietPublisher, machineChanged: (id) => changed.push(id) };
-  const recording = createApp({ config: base.config, db: base.db, logger, mailer, live });
-  closeApp = async () => {
-    await recording.close();
-    mailer.close();
-  };
-  ctx = { ...base, app: recording.app };
+  ctx = createTestContext({ DATABASE_URL: await ownDatabase('reservation_check_in') }, { live: recordingPublisher(changed) });
   await createWaiverVersion(ctx.db);
 });
-afterAll(async () => {
-  await closeApp();
-  await ctx.close();
-});
+afterAll(() => ctx.close());
 
 const MINUTE = 60_000;
 const minutesFromNow = (minutes: number) => new Date(Date.now() + minutes * MINUTE);
-
-async function cleared(holder: BadgeHolder, trainingId: string, signedBy: string) {
-  const current = await ctx.db('waiver_versions').max<{ max: number }>({ max: 'version' }).first();
-  await recordWaiver(ctx.db, { memberId: holder.member.id, version: Number(current?.max) });
-  await createSignOff(ctx.db, { member_id: holder.member.id, training_id: trainingId, signed_by: signedBy, level: 'independent' });
-}
 
 /**
  * A paired welder station needing one training, Ines holding a reservation on it that starts
  * `startsIn` minutes from now, and Jonas, who is cleared on the welder too and has none.
  */
 async function arrange(startsIn = 5, options: { checkInMinutes?: number; status?: 'active' | 'cancelled' } = {}) {
-  const paired = await pairedDevice(ctx);
-  await ctx.db('machines').where({ id: paired.machine.id }).update({ check_in_minutes: options.checkInMinutes ?? 10, no_show_grace_minutes: 15 });
-  const training = await createTraining(ctx.db, { name: `MIG welding safety ${randomUUID().slice(0, 6)}`, machine_ids: [paired.machine.id] });
-  const teacher = await badgeHolder(ctx, 'instructor', { firstName: 'Bettina' });
-  const holder = await badgeHolder(ctx, 'member', { firstName: 'Ines' });
-  const other = await badgeHolder(ctx, 'member', { firstName: 'Jonas' });
-  await cleared(holder, training.id, teacher.member.id);
-  await cleared(other, training.id, teacher.member.id);
   const startsAt = minutesFromNow(startsIn);
-  const endsAt = new Date(startsAt.getTime() + 60 * MINUTE);
-  const status = options.status ?? 'active';
-  const [reservation] = await ctx
-    .db('reservations')
-    .insert({
-      machine_id: paired.machine.id,
-      member_id: holder.member.id,
-      starts_at: startsAt,
-      ends_at: endsAt,
-      blocked_until: endsAt,
-      status,
-      cancelled_at: status === 'cancelled' ? new Date() : null,
-    })
-    .returning<{ id: string }[]>('id');
+  const scene = await welderReservedByInes(
+    ctx,
+    { startsAt, endsAt: new Date(startsAt.getTime() + 60 * MINUTE), status: options.status ?? 'active' },
+    { check_in_minutes: options.checkInMinutes ?? 10, no_show_grace_minutes: 15 },
+  );
   // Creating the station announced its machine; the tests look at what happens from here on.
   changed.length = 0;
-  return { ...paired, holder, other, reservationId: reservation!.id, startsAt };
+  return scene;
 }
 
 type Device = Awaited<ReturnType<typeof arrange>>['device'];
@@ -157,6 +116,29 @@ describe('rule 6 at the scan', () => {
       memberId: holder.member.id,
       memberFirstName: 'Ines',
     });
+  });
+});
+
+describe('the station state’s day rail', () => {
+  it('lists the machine’s live reservations touching today’s 06:00–24:00 in the shop’s zone, first names only', async () => {
+    const { device, machine, holder, reservationId } = await arrange(90);
+    const { timeZone } = await ctx.db('shop').first('time_zone as timeZone');
+    // screens.md "Time bars": the rail runs 06:00–24:00 on the shop's wall clock.
+    const rail = dayRailBounds(new Date(), timeZone);
+    const at = (minutes: number) => new Date(rail.start.getTime() + minutes * MINUTE);
+    await ctx.db('reservations').where({ id: reservationId }).delete();
+    const insert = (startsAt: Date, endsAt: Date, fields: Record<string, unknown> = {}) =>
+      ctx.db('reservations').insert({ machine_id: machine.id, member_id: holder.member.id, starts_at: startsAt, ends_at: endsAt, blocked_until: endsAt, ...fields });
+    await insert(at(-90), at(30));
+    await insert(at(480), at(600), { status: 'checked_in', checked_in_at: at(470) });
+    await insert(at(120), at(180), { status: 'cancelled', cancelled_at: new Date() });
+    await insert(new Date(rail.end.getTime() + 60 * MINUTE), new Date(rail.end.getTime() + 120 * MINUTE));
+
+    const state = stationStateSchema.parse((await device.get('/api/station/state')).body);
+    expect(state.today).toEqual([
+      { startsAt: at(-90).toISOString(), endsAt: at(30).toISOString(), kind: 'member', memberFirstName: 'Ines' },
+      { startsAt: at(480).toISOString(), endsAt: at(600).toISOString(), kind: 'member', memberFirstName: 'Ines' },
+    ]);
   });
 });
 

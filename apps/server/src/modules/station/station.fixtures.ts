@@ -1,6 +1,7 @@
+import { randomUUID } from 'node:crypto';
 import { STATION_COOKIE, type Role, type StationWithCode } from '@chuckkey/core';
 import { hashPassword } from '@chuckkey/db';
-import { createBadge, createMachine, createMember, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
+import { createBadge, createMachine, createMember, createSignOff, createTraining, recordWaiver, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
 import { browser, signedIn, type TestContext } from '../../test/harness';
 
 type SignedIn = Awaited<ReturnType<typeof signedIn>>;
@@ -62,4 +63,46 @@ export async function badgeHolder(
   // Stored as PUT /api/profile/pin stores it: an argon2id hash, like a password.
   if (pin !== null) await ctx.db('members').where({ id: member.id }).update({ pin_hash: await hashPassword(pin) });
   return { member, badge: code, pin: pin ?? '' };
+}
+
+/** The holder accepts the waiver in force and is signed off independently on the training. */
+export async function clearedOn(ctx: TestContext, holder: BadgeHolder, trainingId: string, signedBy: string): Promise<void> {
+  const current = await ctx.db('waiver_versions').max<{ max: number }>({ max: 'version' }).first();
+  await recordWaiver(ctx.db, { memberId: holder.member.id, version: Number(current?.max) });
+  await createSignOff(ctx.db, { member_id: holder.member.id, training_id: trainingId, signed_by: signedBy, level: 'independent' });
+}
+
+/**
+ * A paired welder station needing one training, with Ines and Jonas cleared on it (a waiver
+ * version must be in force) and Ines holding a reservation from `startsAt` to `endsAt`, in the
+ * given status. `machine` sets the welder's booking rules first.
+ */
+export async function welderReservedByInes(
+  ctx: TestContext,
+  reservation: { startsAt: Date; endsAt: Date; status: 'active' | 'checked_in' | 'cancelled' },
+  machine: Record<string, unknown> = {},
+) {
+  const paired = await pairedDevice(ctx);
+  if (Object.keys(machine).length > 0) await ctx.db('machines').where({ id: paired.machine.id }).update(machine);
+  const training = await createTraining(ctx.db, { name: `MIG welding safety ${randomUUID().slice(0, 6)}`, machine_ids: [paired.machine.id] });
+  const teacher = await badgeHolder(ctx, 'instructor', { firstName: 'Bettina' });
+  const holder = await badgeHolder(ctx, 'member', { firstName: 'Ines' });
+  const other = await badgeHolder(ctx, 'member', { firstName: 'Jonas' });
+  await clearedOn(ctx, holder, training.id, teacher.member.id);
+  await clearedOn(ctx, other, training.id, teacher.member.id);
+  const { startsAt, endsAt, status } = reservation;
+  const [row] = await ctx
+    .db('reservations')
+    .insert({
+      machine_id: paired.machine.id,
+      member_id: holder.member.id,
+      starts_at: startsAt,
+      ends_at: endsAt,
+      blocked_until: endsAt,
+      status,
+      checked_in_at: status === 'checked_in' ? startsAt : null,
+      cancelled_at: status === 'cancelled' ? new Date() : null,
+    })
+    .returning<{ id: string }[]>('id');
+  return { ...paired, holder, other, reservationId: row!.id, startsAt, endsAt };
 }

@@ -29,7 +29,12 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'reservation.created': 'Reservation made',
   'reservation.cancelled': 'Reservation cancelled',
   'reservation.no_show': 'Reservation released as a no-show',
+  'reservation.released': 'Rest of a reservation given back',
   'machine.reservation_rules_changed': 'Booking rules changed',
+  'class.created': 'Class scheduled',
+  'class.members_changed': 'Class members changed',
+  'class.cancelled': 'Class cancelled',
+  'class.occurrence_cancelled': 'Class meeting cancelled',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {

@@ -1,23 +1,31 @@
+import type { CalendarFeedStatus } from '@chuckkey/core';
 import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Panel } from '../../../components/ui/panel';
 import { errorMessage } from '../../../lib/api-client';
+import { formatDateTime } from '../../../lib/format';
 import { createCalendarFeed, revokeCalendarFeed } from '../api/calendar-feed';
 
 const REVOKE_WORDS = { calendar_feed_not_found: 'You have no calendar feed to turn off.' };
 
 interface CalendarFeedPanelProps {
+  /** What the server knows of the member's feed; undefined while it is being asked. */
+  status: CalendarFeedStatus | undefined;
+  timeZone?: string | undefined;
   onCreate?: () => Promise<string>;
   onRevoke?: () => Promise<void>;
+  /** After a new link or turning it off, so the status is asked again. */
+  onChanged?: () => Promise<unknown>;
 }
 
 /**
  * The member's private calendar feed. The server keeps only a hash of the address, so it can be
- * shown once, right after it is made; making a new one is how a lost address is replaced.
+ * shown once, right after it is made; after a reload the panel can say only that a link is live
+ * and since when, and making a new one is how a lost address is replaced.
  */
-export function CalendarFeedPanel({ onCreate = createCalendarFeed, onRevoke = revokeCalendarFeed }: CalendarFeedPanelProps) {
+export function CalendarFeedPanel({ status, timeZone, onCreate = createCalendarFeed, onRevoke = revokeCalendarFeed, onChanged }: CalendarFeedPanelProps) {
   const [url, setUrl] = useState<string | null>(null);
   const [creating, setCreating] = useState(false);
   const [createError, setCreateError] = useState<string | null>(null);
@@ -34,6 +42,7 @@ export function CalendarFeedPanel({ onCreate = createCalendarFeed, onRevoke = re
     setRevoked(false);
     try {
       setUrl(await onCreate());
+      await onChanged?.();
     } catch (error) {
       setCreateError(errorMessage(error));
     } finally {
@@ -58,12 +67,17 @@ export function CalendarFeedPanel({ onCreate = createCalendarFeed, onRevoke = re
       setConfirming(false);
       setUrl(null);
       setRevoked(true);
+      await onChanged?.();
     } catch (error) {
       setRevokeError(errorMessage(error, REVOKE_WORDS));
     } finally {
       setRevoking(false);
     }
   }
+
+  // Until the status answers again after turning it off, the earlier answer would still say "live".
+  const live = url !== null || (!revoked && (status?.exists ?? false));
+  const liveSince = !url && live && status?.createdAt ? status.createdAt : null;
 
   return (
     <Panel
@@ -103,21 +117,30 @@ export function CalendarFeedPanel({ onCreate = createCalendarFeed, onRevoke = re
             </div>
           </div>
         )}
+        {liveSince && (
+          <p className="text-neutral-900">
+            Your calendar feed link has been live since {formatDateTime(liveSince, timeZone)}. Its address was shown only once, when it was
+            made: if you no longer have it, make a new link.
+          </p>
+        )}
+        {status === undefined && !url && <p className="text-neutral-700">Checking whether you have a calendar feed…</p>}
         <div className="flex flex-wrap gap-3">
           <Button onClick={() => void create()} pending={creating}>
-            {url ? 'Replace feed address' : 'Make a feed address'}
+            {live ? 'Make a new link' : 'Make a feed link'}
           </Button>
-          <Button
-            variant="secondary"
-            onClick={() => {
-              setRevokeError(null);
-              setConfirming(true);
-            }}
-          >
-            Turn off calendar feed
-          </Button>
+          {live && (
+            <Button
+              variant="secondary"
+              onClick={() => {
+                setRevokeError(null);
+                setConfirming(true);
+              }}
+            >
+              Turn off calendar feed
+            </Button>
+          )}
         </div>
-        <p className="text-sm text-neutral-700">Making a new address stops the old one from working.</p>
+        <p className="text-sm text-neutral-700">Making a new link stops the old one from working.</p>
       </div>
       <ConfirmDialog
         open={confirming}

@@ -31,10 +31,10 @@ beforeAll(() => {
   };
 });
 
-function setup(onCancel = vi.fn(async () => undefined)) {
+function setup(onCancel = vi.fn(async () => undefined), onRelease = vi.fn(async () => undefined), reservations = list) {
   const user = userEvent.setup();
-  render(<MyReservationsList reservations={list} timeZone="America/Chicago" onCancel={onCancel} />);
-  return { user, onCancel };
+  render(<MyReservationsList reservations={reservations} timeZone="America/Chicago" onCancel={onCancel} onRelease={onRelease} />);
+  return { user, onCancel, onRelease };
 }
 
 describe('MyReservationsList', () => {
@@ -63,5 +63,25 @@ describe('MyReservationsList', () => {
     await user.click(screen.getByRole('button', { name: 'Cancel reservation' }));
     expect((await screen.findByRole('alert')).textContent).toContain('can be cancelled');
     expect(screen.getByRole('dialog')).toBeTruthy();
+  });
+
+  it('offers to release the rest only on a checked-in reservation still running, after the question is confirmed', async () => {
+    // Saturday 14 March 2026, 9:00–11:00 in Chicago on CDT (UTC−5), per the IANA tz database via Intl.
+    const running = { upcoming: [reservation(4, '2026-03-14T14:00:00Z', '2026-03-14T16:00:00Z', 'checked_in')], past: list.past };
+    const { user, onRelease, onCancel } = setup(undefined, undefined, running);
+    expect(screen.queryByRole('button', { name: /^Cancel the MIG welder/ })).toBeNull();
+    await user.click(screen.getByRole('button', { name: "I'm done, release the rest of the MIG welder on Saturday 14 March, 9:00–11:00" }));
+    const dialog = screen.getByRole('dialog', { name: 'Release the rest of this reservation?' });
+    expect(dialog.textContent).toContain('goes back to everyone');
+    expect(onRelease).not.toHaveBeenCalled();
+
+    await user.click(within(dialog).getByRole('button', { name: 'Release the rest' }));
+    expect(onRelease).toHaveBeenCalledWith(running.upcoming[0]?.id);
+    expect(onCancel).not.toHaveBeenCalled();
+  });
+
+  it('shows no release on an upcoming reservation not yet checked into, nor on past ones', () => {
+    setup();
+    expect(screen.queryByRole('button', { name: /release the rest/ })).toBeNull();
   });
 });

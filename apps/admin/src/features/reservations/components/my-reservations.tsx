@@ -10,6 +10,7 @@ interface MyReservationsListProps {
   reservations: MyReservations;
   timeZone: string;
   onCancel: (reservationId: string) => Promise<unknown>;
+  onRelease: (reservationId: string) => Promise<unknown>;
 }
 
 const statusWords: Record<ReservationStatus, string> = {
@@ -20,9 +21,21 @@ const statusWords: Record<ReservationStatus, string> = {
   no_show: 'No-show',
 };
 
-/** The member's own reservations: what is coming (cancellable until checked into), what is past, and the no-shows that can pause reserving. */
-export function MyReservationsList({ reservations, timeZone, onCancel }: MyReservationsListProps) {
+const classStatusWords: Record<ReservationStatus, string> = {
+  active: 'Booked',
+  checked_in: 'Checked in',
+  cancelled: 'Cancelled by the instructor',
+  released: 'Freed for others',
+  no_show: 'Missed',
+};
+
+/**
+ * The member's own reservations: what is coming (cancellable until checked into, its rest given
+ * back once checked into), what is past, and the no-shows that can pause reserving.
+ */
+export function MyReservationsList({ reservations, timeZone, onCancel, onRelease }: MyReservationsListProps) {
   const [cancelling, setCancelling] = useState<MyReservation | null>(null);
+  const [releasing, setReleasing] = useState<MyReservation | null>(null);
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const missed = reservations.past.filter((r) => r.status === 'no_show');
@@ -42,23 +55,52 @@ export function MyReservationsList({ reservations, timeZone, onCancel }: MyReser
     }
   }
 
+  async function confirmRelease() {
+    if (!releasing) return;
+    setPending(true);
+    setError(null);
+    try {
+      await onRelease(releasing.id);
+      setReleasing(null);
+    } catch (caught) {
+      setError(errorMessage(caught));
+    } finally {
+      setPending(false);
+    }
+  }
+
+  // A class occurrence belongs to the class's instructor: the member sees it but cannot cancel it here.
   const row = (reservation: MyReservation, cancellable: boolean) => (
     <li key={reservation.id} className="flex flex-wrap items-center justify-between gap-2 border-b border-neutral-200 py-2 last:border-0">
       <div className="flex flex-col">
-        <span className="font-bold text-neutral-900">{reservation.machineName}</span>
+        {reservation.kind === 'class' ? (
+          <span className="flex flex-wrap items-center gap-2">
+            <span className="rounded-sm border border-brand px-1.5 text-sm font-bold text-brand">Class</span>
+            <span className="font-bold text-neutral-900">{reservation.classTitle ?? 'Class'}</span>
+          </span>
+        ) : (
+          <span className="font-bold text-neutral-900">{reservation.machineName}</span>
+        )}
+        {reservation.kind === 'class' && <span className="text-neutral-800">{reservation.machineName}</span>}
         <span className="text-neutral-800">{spanLabel(new Date(reservation.start), new Date(reservation.end), timeZone)}</span>
-        <span className="text-sm text-neutral-700">
-          {reservation.kind === 'class' ? 'Class · ' : ''}
-          {statusWords[reservation.status]}
-        </span>
+        <span className="text-sm text-neutral-700">{reservation.kind === 'class' ? classStatusWords[reservation.status] : statusWords[reservation.status]}</span>
       </div>
-      {cancellable && reservation.status === 'active' && (
+      {cancellable && reservation.kind === 'member' && reservation.status === 'active' && (
         <Button
           variant="secondary"
           aria-label={`Cancel the ${reservation.machineName} on ${spanLabel(new Date(reservation.start), new Date(reservation.end), timeZone)}`}
           onClick={() => setCancelling(reservation)}
         >
           Cancel
+        </Button>
+      )}
+      {cancellable && reservation.kind === 'member' && reservation.status === 'checked_in' && (
+        <Button
+          variant="secondary"
+          aria-label={`I'm done, release the rest of the ${reservation.machineName} on ${spanLabel(new Date(reservation.start), new Date(reservation.end), timeZone)}`}
+          onClick={() => setReleasing(reservation)}
+        >
+          I'm done, release the rest
         </Button>
       )}
     </li>
@@ -107,6 +149,21 @@ export function MyReservationsList({ reservations, timeZone, onCancel }: MyReser
         }}
       >
         {cancelling && `The ${cancelling.machineName} on ${spanLabel(new Date(cancelling.start), new Date(cancelling.end), timeZone)} goes back to everyone.`}
+      </ConfirmDialog>
+
+      <ConfirmDialog
+        open={releasing !== null}
+        title="Release the rest of this reservation?"
+        confirmLabel="Release the rest"
+        pending={pending}
+        error={error}
+        onConfirm={confirmRelease}
+        onCancel={() => {
+          setReleasing(null);
+          setError(null);
+        }}
+      >
+        {releasing && `The rest of your time on the ${releasing.machineName} goes back to everyone: others may reserve it or start on the machine. This cannot be undone.`}
       </ConfirmDialog>
     </div>
   );

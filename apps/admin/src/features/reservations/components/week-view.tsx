@@ -90,7 +90,7 @@ export function WeekView({ days, chosen, onChoose }: WeekViewProps) {
                         )}
                       >
                         <span className="font-bold">{slot.time}</span>
-                        <span className="text-xs">{isChosen ? 'Chosen' : stateWords[slot.state]}</span>
+                        <span className="max-w-full truncate px-1 text-xs">{isChosen ? 'Chosen' : (slot.classTitle ?? stateWords[slot.state])}</span>
                       </button>
                     </li>
                   );

@@ -60,6 +60,17 @@ describe('weekSlots', () => {
     expect(days[5]?.slots.map((s) => s.state)).toEqual(['taken', 'taken', 'class']);
   });
 
+  it('names the class that holds a slot, for the eye and for a screen reader', () => {
+    const days = weekSlots({
+      ...base,
+      taken: [{ start: '2026-03-07T15:00:00Z', end: '2026-03-07T16:00:00Z', blockedUntil: '2026-03-07T16:00:00Z', kind: 'class', title: 'Lathe basics class' }],
+    });
+    const slot = days[5]?.slots[0];
+    expect(slot?.classTitle).toBe('Lathe basics class');
+    expect(slot?.label).toBe('Saturday 9:00, held for the class Lathe basics class');
+    expect(days[5]?.slots[1]?.classTitle).toBeNull();
+  });
+
   it('marks slots that have begun as past', () => {
     const days = weekSlots({ ...base, now: new Date('2026-03-07T16:30:00Z') });
     expect(days[5]?.slots.map((s) => s.state)).toEqual(['past', 'past', 'free']);
@@ -100,5 +111,10 @@ describe('quotaLeft', () => {
     ];
     expect(quotaLeft(mine, '00000000-0000-4000-8000-0000000000aa', '2026-03-02', CHICAGO, 360)).toBe(240);
     expect(quotaLeft(mine, '00000000-0000-4000-8000-0000000000bb', '2026-03-02', CHICAGO, 360)).toBe(360);
+  });
+
+  it("leaves a class the member is booked into out of their quota: the hold is the instructor's (common practice, no published source)", () => {
+    const mine = [{ ...reservation('2026-03-07T15:00:00Z', '2026-03-07T18:00:00Z'), kind: 'class' as const }];
+    expect(quotaLeft(mine, '00000000-0000-4000-8000-0000000000aa', '2026-03-02', CHICAGO, 360)).toBe(360);
   });
 });

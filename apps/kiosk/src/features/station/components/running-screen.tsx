@@ -1,6 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
+import { TimeBar, type TimeBarItem } from '@/components/ui/time-bar';
 import { useNow } from '@/hooks/use-now';
 import { describeElapsed, formatElapsed } from '@/lib/elapsed';
 import { BadgeReader } from './badge-reader';
@@ -15,6 +16,9 @@ export function RunningScreen({
   scanning,
   message,
   warning,
+  reservedToday,
+  nextReservationLine,
+  timeZone,
 }: {
   firstName: string;
   startedAt: string;
@@ -25,6 +29,11 @@ export function RunningScreen({
   message: ReactNode;
   /** Someone else's reservation is near: the session runs on, and the member is asked to finish. */
   warning: string | null;
+  /** Today's reservations on the machine, for the day's time bar beside this session. */
+  reservedToday: readonly TimeBarItem[];
+  /** The next reservation in words ("Next reservation: Ines, 14:00–16:00"), or null when there is none. */
+  nextReservationLine: string | null;
+  timeZone: string;
 }) {
   const now = useNow();
   const [confirming, setConfirming] = useState(false);
@@ -46,6 +55,19 @@ export function RunningScreen({
         {formatElapsed(elapsed)}
       </p>
       <p className="sr-only">Running for {describeElapsed(elapsed)}</p>
+      <TimeBar
+        size="full"
+        label="Today on this machine"
+        items={[{ startsAt: startedAt, endsAt: new Date(now).toISOString(), kind: 'session', who: firstName }, ...reservedToday]}
+        now={new Date(now)}
+        timeZone={timeZone}
+        caption={
+          <>
+            <Icon name="hourglass" className="size-9" />
+            {nextReservationLine ?? 'No reservation ahead on this machine'}
+          </>
+        }
+      />
       {confirming ? (
         <div role="dialog" aria-label="End the session?" className="flex flex-col items-center gap-4">
           <p className="text-kiosk-lead font-bold">End {firstName}’s session now?</p>

@@ -1,11 +1,13 @@
 import { machineCategoryLabels, type StationSelf } from '@chuckkey/core';
+import type { ReactNode } from 'react';
 import { Nameplate } from '@/components/ui/nameplate';
 
 /**
  * The machine's nameplate: in use while a session runs, else available. Tagged out arrives with
- * tag-outs, and the plate never claims what the station cannot know.
+ * tag-outs, and the plate never claims what the station cannot know. `children` sit under the
+ * plate, such as the idle screen's mini time bar.
  */
-export function StationHeader({ station, compact = false, inUse = false }: { station: StationSelf; compact?: boolean; inUse?: boolean }) {
+export function StationHeader({ station, compact = false, inUse = false, children }: { station: StationSelf; compact?: boolean; inUse?: boolean; children?: ReactNode }) {
   if (!station.machine) {
     return (
       <header className="bg-brand px-8 py-4 text-white">
@@ -14,8 +16,9 @@ export function StationHeader({ station, compact = false, inUse = false }: { sta
     );
   }
   return (
-    <header className="px-6 pt-5">
+    <header className="flex flex-col gap-3 px-6 pt-5">
       <Nameplate name={station.machine.name} state={inUse ? 'in_use' : 'available'} detail={machineCategoryLabels[station.machine.category as keyof typeof machineCategoryLabels] ?? station.machine.category} size={compact ? 'md' : 'lg'} />
+      {children}
     </header>
   );
 }

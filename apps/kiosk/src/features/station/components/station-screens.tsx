@@ -3,6 +3,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
+import { TimeBar, type TimeBarItem } from '@/components/ui/time-bar';
 import { useNow } from '@/hooks/use-now';
 import { isApiError } from '@/lib/api-client';
 import { formatElapsed } from '@/lib/elapsed';
@@ -125,6 +126,8 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
 
   const supervisorOnDuty = state.data?.supervisorOnDuty?.firstName ?? null;
   const nextReservation = state.data?.nextReservation ?? null;
+  const reservedToday: TimeBarItem[] = (state.data?.today ?? []).map((r) => ({ startsAt: r.startsAt, endsAt: r.endsAt, kind: r.kind, who: r.memberFirstName }));
+  const idle = screen.name === 'idle' && !running;
 
   const checkInFor = (badge: string, answer: StationScanResult) => {
     const reservation = answer.nextReservation;
@@ -143,7 +146,25 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
 
   return (
     <>
-      <StationHeader station={station} compact={screen.name !== 'idle'} inUse={Boolean(running)} />
+      <StationHeader station={station} compact={screen.name !== 'idle'} inUse={Boolean(running)}>
+        {idle && state.data ? (
+          <TimeBar
+            size="mini"
+            label="Today on this machine"
+            items={reservedToday}
+            now={new Date(now)}
+            timeZone={timeZone}
+            caption={
+              nextReservation ? (
+                <>
+                  <Icon name="hourglass" className="size-9" />
+                  {reservationLine(nextReservation, new Date(now), timeZone)}
+                </>
+              ) : null
+            }
+          />
+        ) : null}
+      </StationHeader>
       <main className="flex flex-1 flex-col items-center justify-center gap-6 px-8 py-6">
         {screen.name === 'idle' && running ? (
           <RunningScreen
@@ -155,20 +176,17 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
             scanning={scanner.isPending}
             message={message}
             warning={reservationWarning(nextReservation, state.data?.runningSession?.memberId ?? null, new Date(now), timeZone)}
+            reservedToday={reservedToday}
+            nextReservationLine={nextReservation ? reservationLine(nextReservation, new Date(now), timeZone) : null}
+            timeZone={timeZone}
           />
         ) : null}
-        {screen.name === 'idle' && !running ? (
+        {idle ? (
           <>
             {pending.length ? (
               <p role="status" className="flex items-center gap-4 rounded-lg border-2 border-link-down px-6 py-3 text-kiosk-body">
                 <Icon name="hourglass" className="size-9" />
                 {KEPT_OFFLINE}
-              </p>
-            ) : null}
-            {nextReservation ? (
-              <p className="flex items-center gap-3 rounded-lg border-2 border-state-reserved px-6 py-3 text-kiosk-body font-bold">
-                <Icon name="hourglass" className="size-9 text-state-reserved" />
-                {reservationLine(nextReservation, new Date(now), timeZone)}
               </p>
             ) : null}
             <BadgeReader prompt="Hold your badge to the camera or scan it" onBadge={scan} busy={scanner.isPending} message={message} />
