@@ -70,6 +70,39 @@ test.describe('reserving machine time from home', () => {
     }
   });
 
+  test('a member who is done early releases the rest of a running reservation from My record, and the time is free again', async ({ page, db, createUser }) => {
+    const member = await createUser({ role: 'member', first_name: 'Anselm' });
+    const machineName = `Cold saw ${Date.now() % 100_000}`;
+    const machine = await createMachine(db, { name: machineName, category: 'band_saw', reservable: true });
+    try {
+      // Checked in a quarter of an hour ago, an hour and three quarters still to run.
+      const start = new Date(Date.now() - 15 * 60_000);
+      const end = new Date(start.getTime() + 2 * 3_600_000);
+      const [reservation] = await db('reservations')
+        .insert({ machine_id: machine.id, member_id: member.id, starts_at: start, ends_at: end, blocked_until: end, status: 'checked_in', checked_in_at: start })
+        .returning<{ id: string }[]>('id');
+
+      await signIn(page, member.email, member.password);
+      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My record' }).click();
+      await page.getByRole('button', { name: new RegExp(`^I'm done, release the rest of the ${machineName}`) }).click();
+      const dialog = page.getByRole('dialog', { name: 'Release the rest of this reservation?' });
+      await expect(dialog).toContainText('goes back to everyone');
+      await dialog.getByRole('button', { name: 'Release the rest' }).click();
+      await expect(dialog).toHaveCount(0);
+
+      await expect(page.getByText('Freed for others').first()).toBeVisible();
+      const stored = await db('reservations').first('status', 'released_at').where({ id: reservation!.id });
+      expect(stored.status).toBe('released');
+      expect(stored.released_at).not.toBeNull();
+      await expect(page.getByRole('button', { name: new RegExp(`^I'm done, release the rest of the ${machineName}`) })).toHaveCount(0);
+    } finally {
+      await db('audit_log').where({ entity_id: machine.id }).orWhere({ member_id: member.id }).delete();
+      await db('reservations').where({ machine_id: machine.id }).delete();
+      await db('machines').where({ id: machine.id }).delete();
+      await db('areas').where({ id: machine.area_id }).delete();
+    }
+  });
+
   test('an admin finds a missed reservation under People, filtered by machine, and exports the same list as CSV', async ({ page, db, createUser }) => {
     const admin = await createUser({ role: 'admin' });
     const member = await createUser({ role: 'member', first_name: 'Wilhelmina', last_name: 'Oduya' });
