@@ -54,7 +54,8 @@ export function calendarFeedRepository(db: Db) {
         .select({
           id: 'r.id',
           startsAt: 'r.starts_at',
-          endsAt: 'r.ends_at',
+          // A reservation given back early ended, for the member's calendar, when it was released.
+          endsAt: db.raw('coalesce(r.released_at, r.ends_at)'),
           status: 'r.status',
           machineName: 'm.name',
           memberEmail: 'p.email',

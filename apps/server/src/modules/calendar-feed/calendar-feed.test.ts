@@ -53,6 +53,26 @@ describe('a member’s calendar feed', () => {
     ]);
   });
 
+  it('ends a reservation released early at the time it was given back', async () => {
+    const machine = await createMachine(ctx.db, { category: 'mig_welder', reservable: true });
+    const member = await signedIn(ctx, 'member');
+    const start = new Date(Math.floor(Date.now() / 3_600_000) * 3_600_000 + 2 * 3_600_000);
+    const end = new Date(start.getTime() + 2 * 3_600_000);
+    const releasedAt = new Date(start.getTime() + 40 * 60_000);
+    const [row] = await ctx
+      .db('reservations')
+      .insert({ machine_id: machine.id, member_id: member.member.id, starts_at: start, ends_at: end, blocked_until: end, status: 'released', checked_in_at: start, released_at: releasedAt })
+      .returning<{ id: string }[]>('id');
+    const { url } = calendarFeedCreatedSchema.parse((await member.post('/api/profile/calendar-feed')).body);
+
+    const calendar = new ICAL.Component(ICAL.parse((await request(ctx.app).get(pathOf(url))).text));
+    const [event] = calendar.getAllSubcomponents('vevent');
+    // RFC 5545 §3.8.2.2 (DTEND): the entry ends when the member gave the rest of the time back.
+    expect(event!.getFirstPropertyValue('uid')).toBe(`${row!.id}@chuckkey`);
+    expect((event!.getFirstPropertyValue('dtend') as ICAL.Time).toJSDate().toISOString()).toBe(releasedAt.toISOString());
+    expect(event!.getFirstPropertyValue('status')).toBe('CONFIRMED');
+  });
+
   it('stops working when replaced or turned off, and answers 404 to an unknown secret', async () => {
     const member = await signedIn(ctx, 'member');
     const first = calendarFeedCreatedSchema.parse((await member.post('/api/profile/calendar-feed')).body).url;
