@@ -8,6 +8,7 @@ import { Spinner } from '../../components/ui/spinner';
 import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
 import { useMachine } from '../../features/machines/api/get-machine';
+import { BookingRulesPanelBody } from '../../features/machines/components/booking-rules-form';
 import { MachineForm } from '../../features/machines/components/machine-form';
 import { useAreas } from '../../features/shop/api/get-areas';
 import { trainingKeys } from '../../features/trainings/api/training-keys';
@@ -52,7 +53,16 @@ function ExistingMachine({ machineId }: { machineId: string }) {
   if (machine.isError) {
     return <QueryError error={machine.error} what="the machine" onRetry={() => void machine.refetch()} retrying={machine.isFetching} />;
   }
-  return <MachineEditor key={machine.data.id} machine={machine.data} />;
+  return (
+    <>
+      <Panel title="Machine details">
+        <MachineEditor key={machine.data.id} machine={machine.data} />
+      </Panel>
+      <Panel title="Booking rules" description="How members reserve this machine ahead, and what a missed reservation costs them." className="mt-6">
+        <BookingRulesPanelBody machineId={machine.data.id} machineName={machine.data.name} />
+      </Panel>
+    </>
+  );
 }
 
 export default function SetupMachineEditRoute() {
@@ -68,7 +78,13 @@ export default function SetupMachineEditRoute() {
         <TextLink to={paths.setupMachines.getHref()}>Back to the machines</TextLink>
       </p>
       <PageHeading title={isNew ? 'Add a machine' : 'Edit machine'} />
-      <Panel title={isNew ? 'New machine' : 'Machine details'}>{isNew ? <MachineEditor /> : <ExistingMachine machineId={machineId} />}</Panel>
+      {isNew ? (
+        <Panel title="New machine">
+          <MachineEditor />
+        </Panel>
+      ) : (
+        <ExistingMachine machineId={machineId} />
+      )}
     </>
   );
 }

@@ -52,6 +52,11 @@ export function reservationsRoutes(deps: Deps): Router {
     res.set('Cache-Control', 'no-store').json(await service.availability(id, query));
   });
 
+  router.get('/machines/:id/reservation-rules', requirePermission('manage:machine:any'), async (req, res) => {
+    const { id } = parse(idParamsSchema, req.params, 'params');
+    res.set('Cache-Control', 'no-store').json(await service.rules(id));
+  });
+
   router.put('/machines/:id/reservation-rules', requirePermission('manage:machine:any'), async (req, res) => {
     const { id } = parse(idParamsSchema, req.params, 'params');
     const input = parse(reservationRulesInputSchema, req.body, 'body');

@@ -185,6 +185,13 @@ export function reservationsService(deps: Deps) {
       return { upcoming, past };
     },
 
+    /** Whether the machine can be reserved and its booking rules, for the admins' form. */
+    async rules(machineId: string): Promise<MachineReservationRules> {
+      const machine = await reservationsRepository(db).machine(machineId);
+      if (!machine) throw machineNotFound();
+      return { machineId, reservable: machine.reservable, rules: machine.rules };
+    },
+
     /** An admin sets whether the machine can be reserved and its rules; claims already made keep their buffer. */
     async setRules(actor: Express.User, machineId: string, input: ReservationRulesInput): Promise<MachineReservationRules> {
       return db.transaction(async (trx) => {

@@ -294,7 +294,7 @@ describe('GET /api/machines/:id/availability', () => {
   });
 });
 
-describe('PUT /api/machines/:id/reservation-rules', () => {
+describe('GET and PUT /api/machines/:id/reservation-rules', () => {
   const rules = {
     reservable: true,
     slotMinutes: 30,
@@ -327,6 +327,18 @@ describe('PUT /api/machines/:id/reservation-rules', () => {
     expect(await ctx.db('reservations').first('blocked_until').where({ id: made.body.id })).toEqual({ blocked_until: slot(2, 10) });
     const offStep = await member.post('/api/reservations', body(machine.id, slot(3, 9, 15), slot(3, 10, 15)));
     expect(offStep.body.code).toBe('bad_step');
+    // The admins' form reads back what was saved.
+    const read = await admin.get(`/api/machines/${machine.id}/reservation-rules`);
+    expect(read.status).toBe(200);
+    expect(machineReservationRulesSchema.parse(read.body)).toEqual({ machineId: machine.id, reservable, rules: expected });
+  });
+
+  it('reads the rules only for admins, and answers 404 for an unknown machine', async () => {
+    const machine = await reservableMachine();
+    expect((await (await signedIn(ctx, 'member')).get(`/api/machines/${machine.id}/reservation-rules`)).status).toBe(403);
+    expect((await (await signedIn(ctx, 'instructor')).get(`/api/machines/${machine.id}/reservation-rules`)).status).toBe(403);
+    const unknown = await (await signedIn(ctx, 'admin')).get(`/api/machines/${randomUUID()}/reservation-rules`);
+    expect([unknown.status, unknown.body.code]).toEqual([404, 'machine_not_found']);
   });
 
   it('answers 400 for a step that does not divide the day or a maximum off the step, and 403 to an instructor', async () => {

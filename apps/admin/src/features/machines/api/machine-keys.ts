@@ -5,4 +5,5 @@ export const machineKeys = {
   details: () => [...machineKeys.all, 'detail'] as const,
   detail: (id: string) => [...machineKeys.details(), id] as const,
   states: () => [...machineKeys.all, 'states'] as const,
+  reservationRules: (id: string) => [...machineKeys.detail(id), 'reservation-rules'] as const,
 };
