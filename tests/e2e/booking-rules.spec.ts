@@ -1,21 +1,8 @@
 import { createMachine } from '@chuckkey/db/factories';
-import type { Page } from '@playwright/test';
 import { expectNoWcagViolations } from './axe';
 import { expect, signIn, test } from './fixtures';
+import { comingSaturdayIsNextWeek, openMachineWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
-
-/** Whether the coming Saturday lies in next Monday-to-Sunday week of the shop: it does on a Saturday or a Sunday. */
-function comingSaturdayIsNextWeek(timeZone: string): boolean {
-  const today = new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long' }).format(new Date());
-  return today === 'Saturday' || today === 'Sunday';
-}
-
-async function openMachineWeek(page: Page, machineName: string, timeZone: string): Promise<void> {
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reserve' }).click();
-  await page.getByRole('link', { name: new RegExp(machineName) }).click();
-  await expect(page.getByRole('heading', { name: new RegExp(`^${machineName}: week of`) })).toBeVisible();
-  if (comingSaturdayIsNextWeek(timeZone)) await page.getByRole('button', { name: 'Next week' }).click();
-}
 
 test.describe('booking rules of a machine', () => {
   // The member's reservation must fall inside opening hours, whatever the database's own are.
@@ -37,7 +24,7 @@ test.describe('booking rules of a machine', () => {
     try {
       // The member has the week open with the old rules (default maximum 2 h, docs/api.md) when the admin changes them.
       await signIn(page, member.email, member.password);
-      await openMachineWeek(page, machineName, shop.timeZone);
+      await openMachineWeek(page, machineName, comingSaturdayIsNextWeek(shop.timeZone));
       await page.getByRole('button', { name: 'Saturday 9:00, free' }).click();
       await expect(page.getByRole('list', { name: 'Rules for this machine' })).toContainText('At most 2 h at a time.');
 

@@ -1,7 +1,7 @@
 import { createMachine } from '@chuckkey/db/factories';
-import type { Page } from '@playwright/test';
 import { expectNoWcagViolations } from './axe';
 import { expect, signIn, test } from './fixtures';
+import { openMachineWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
 
 const DAY_MS = 86_400_000;
@@ -11,13 +11,6 @@ function shopDay(instant: Date, timeZone: string): { date: string; weekday: stri
   const date = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(instant);
   const weekday = new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long' }).format(instant);
   return { date, weekday };
-}
-
-async function openMachineWeek(page: Page, machineName: string, nextWeek: boolean): Promise<void> {
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reserve' }).click();
-  await page.getByRole('link', { name: new RegExp(machineName) }).click();
-  await expect(page.getByRole('heading', { name: new RegExp(`^${machineName}: week of`) })).toBeVisible();
-  if (nextWeek) await page.getByRole('button', { name: 'Next week' }).click();
 }
 
 test.describe('classes that hold a machine', () => {

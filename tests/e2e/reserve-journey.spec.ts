@@ -1,16 +1,11 @@
 import type { Page } from '@playwright/test';
 import { createBadge, createMachine, createSignOff, createTraining } from '@chuckkey/db/factories';
 import { expect, signIn, test } from './fixtures';
+import { comingSaturdayIsNextWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
 import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, withCurrentWaiver } from './station-fixtures';
 
 const MINUTE = 60_000;
-
-/** Whether the coming Saturday lies in next Monday-to-Sunday week of the shop: it does on a Saturday or a Sunday. */
-function comingSaturdayIsNextWeek(timeZone: string): boolean {
-  const today = new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long' }).format(new Date());
-  return today === 'Saturday' || today === 'Sunday';
-}
 
 /** A hand scanner types the code and Enter a few milliseconds apart with no field focused; sent from inside the page in one go. */
 async function scan(page: Page, code: string) {

@@ -1,21 +1,8 @@
 import { createMachine } from '@chuckkey/db/factories';
-import type { Page } from '@playwright/test';
 import { expectNoWcagViolations } from './axe';
 import { expect, signIn, test } from './fixtures';
+import { comingSaturdayIsNextWeek, openMachineWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
-
-/** Whether the coming Saturday lies in next Monday-to-Sunday week of the shop: it does on a Saturday or a Sunday. */
-function comingSaturdayIsNextWeek(timeZone: string): boolean {
-  const today = new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long' }).format(new Date());
-  return today === 'Saturday' || today === 'Sunday';
-}
-
-async function openMachineWeek(page: Page, machineName: string, timeZone: string): Promise<void> {
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reserve' }).click();
-  await page.getByRole('link', { name: new RegExp(machineName) }).click();
-  await expect(page.getByRole('heading', { name: new RegExp(`^${machineName}: week of`) })).toBeVisible();
-  if (comingSaturdayIsNextWeek(timeZone)) await page.getByRole('button', { name: 'Next week' }).click();
-}
 
 test.describe('reserving machine time from home', () => {
   // The reservation must fall inside opening hours; the database may be the demo shop's, with its own.
@@ -35,7 +22,7 @@ test.describe('reserving machine time from home', () => {
     const machine = await createMachine(db, { name: machineName, category: 'mig_welder', reservable: true });
     try {
       await signIn(page, first.email, first.password);
-      await openMachineWeek(page, machineName, shop.timeZone);
+      await openMachineWeek(page, machineName, comingSaturdayIsNextWeek(shop.timeZone));
 
       await page.getByRole('button', { name: 'Saturday 9:00, free' }).click();
       const form = page.getByRole('list', { name: 'Rules for this machine' });
@@ -52,7 +39,7 @@ test.describe('reserving machine time from home', () => {
 
       await page.getByRole('button', { name: 'Sign out' }).click();
       await signIn(page, second.email, second.password);
-      await openMachineWeek(page, machineName, shop.timeZone);
+      await openMachineWeek(page, machineName, comingSaturdayIsNextWeek(shop.timeZone));
 
       // 8:00 for two hours runs into the first member's 9:00–11:00: the database's exclusion constraint refuses it.
       await page.getByRole('button', { name: 'Saturday 8:00, free' }).click();
