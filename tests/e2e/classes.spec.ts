@@ -1,6 +1,6 @@
 import { createMachine } from '@chuckkey/db/factories';
 import { expectNoWcagViolations } from './axe';
-import { expect, signIn, test } from './fixtures';
+import { expect, signIn, signOut, test } from './fixtures';
 import { openMachineWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
 
@@ -75,7 +75,7 @@ test.describe('classes that hold a machine', () => {
       await expect(page.getByRole('status').filter({ hasText: 'is booked into the class' })).toBeVisible();
       await expect(page.getByRole('list', { name: 'Booked members' })).toContainText(`Philippa Lindqvist${suffix}`);
       await expectNoWcagViolations(page);
-      await page.getByRole('button', { name: 'Sign out' }).click();
+      await signOut(page);
 
       await signIn(page, booked.email, booked.password);
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reserve' }).click();
@@ -91,7 +91,7 @@ test.describe('classes that hold a machine', () => {
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My record' }).click();
       await expect(page.getByRole('list', { name: 'Upcoming' }).getByRole('listitem')).toHaveCount(3);
       await expect(page.getByRole('list', { name: 'Upcoming' }).getByRole('listitem').first()).toContainText(title);
-      await page.getByRole('button', { name: 'Sign out' }).click();
+      await signOut(page);
 
       await signIn(page, other.email, other.password);
       await openMachineWeek(page, machineName, tomorrowIsNextWeek);

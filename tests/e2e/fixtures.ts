@@ -40,6 +40,16 @@ export async function signIn(page: Page, email: string, password: string): Promi
   await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
 }
 
+/**
+ * Signs out through the web app and waits until the server has ended the session, so that a
+ * sign-in or request that follows cannot race the sign-out (and lose its own session to it).
+ */
+export async function signOut(page: Page): Promise<void> {
+  const ended = page.waitForResponse((response) => new URL(response.url()).pathname === '/api/auth/logout' && response.request().method() === 'POST');
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  expect((await ended).ok()).toBe(true);
+}
+
 export const test = base.extend<TestFixtures, WorkerFixtures>({
   db: [
     async ({}, use) => {

@@ -1,5 +1,5 @@
 import type { Role } from '@chuckkey/core';
-import { expect, test } from './fixtures';
+import { expect, signOut, test } from './fixtures';
 
 const linksByRole: Record<Role, string[]> = {
   member: ['Shop floor', 'Reserve', 'My record', 'Profile'],
@@ -62,7 +62,7 @@ test.describe('main navigation', () => {
   test('signing out returns to the sign-in page and ends the session', async ({ page, signInAs }) => {
     await signInAs('member');
 
-    await page.getByRole('button', { name: 'Sign out' }).click();
+    await signOut(page);
 
     await expect(page.getByRole('button', { name: 'Sign in' })).toBeVisible();
     await expect(page.getByRole('navigation', { name: 'Main' })).toHaveCount(0);

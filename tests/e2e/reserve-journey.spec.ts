@@ -1,6 +1,6 @@
 import type { Page } from '@playwright/test';
 import { createBadge, createMachine, createSignOff, createTraining } from '@chuckkey/db/factories';
-import { expect, signIn, test } from './fixtures';
+import { expect, signIn, signOut, test } from './fixtures';
 import { comingSaturdayIsNextWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
 import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, withCurrentWaiver } from './station-fixtures';
@@ -47,7 +47,7 @@ test.describe('a reservation from booking to check-in', () => {
       const upcoming = page.getByRole('list', { name: 'Upcoming' });
       await expect(upcoming).toContainText(machineName);
       await expect(upcoming).toContainText(/Saturday \d+ \w+, 9:00–11:00/);
-      await page.getByRole('button', { name: 'Sign out' }).click();
+      await signOut(page);
 
       await signIn(page, admin.email, admin.password);
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
@@ -60,7 +60,7 @@ test.describe('a reservation from booking to check-in', () => {
       const file = await page.request.get((await download.getAttribute('href')) ?? '');
       expect(file.status()).toBe(200);
       expect(await file.text()).toContain('BEGIN:VCALENDAR');
-      await page.getByRole('button', { name: 'Sign out' }).click();
+      await signOut(page);
 
       // The check-in window opens 10 minutes before the start (the machine's default), so the
       // reservation is moved to five minutes from now.

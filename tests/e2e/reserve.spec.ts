@@ -1,6 +1,6 @@
 import { createMachine } from '@chuckkey/db/factories';
 import { expectNoWcagViolations } from './axe';
-import { expect, signIn, test } from './fixtures';
+import { expect, signIn, signOut, test } from './fixtures';
 import { comingSaturdayIsNextWeek, openMachineWeek } from './reserve-fixtures';
 import { openShopForEachTest } from './shop-hours';
 
@@ -37,7 +37,7 @@ test.describe('reserving machine time from home', () => {
       await expect(upcoming).toContainText(/Saturday \d+ \w+, 9:00–11:00/);
       await expect(page.getByRole('button', { name: 'Saturday 9:00, taken' })).toBeVisible();
 
-      await page.getByRole('button', { name: 'Sign out' }).click();
+      await signOut(page);
       await signIn(page, second.email, second.password);
       await openMachineWeek(page, machineName, comingSaturdayIsNextWeek(shop.timeZone));
 
