@@ -1,10 +1,8 @@
 import { auditActions } from '@chuckkey/core';
 import { Link } from 'react-router-dom';
-import { buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { DownloadIcon } from '../../../components/ui/icons';
+import { ChoiceFilter, FilterBar } from '../../../components/ui/filter-bar';
 import { PagedResults } from '../../../components/ui/paged-results';
-import { SelectField } from '../../../components/ui/select-field';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format';
@@ -18,28 +16,17 @@ export function AuditLogView({ timeZone }: { timeZone: string | undefined }) {
 
   return (
     <div className="flex flex-col gap-4">
-      <div role="search" aria-label="Filter the audit log" className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
-        <SelectField
+      <FilterBar label="Filter the audit log" exportHref={auditCsvHref(filters)}>
+        <ChoiceFilter
           label="Action"
-          value={filters.action ?? ''}
-          onChange={(event) => {
-            const value = event.target.value;
-            update({ action: isAuditAction(value) ? value : undefined });
-          }}
-          containerClassName="flex flex-col gap-1.5 sm:w-72"
-        >
-          <option value="">Every action</option>
-          {auditActions.map((action) => (
-            <option key={action} value={action}>
-              {auditActionLabels[action]}
-            </option>
-          ))}
-        </SelectField>
-        <a href={auditCsvHref(filters)} download className={buttonClasses('secondary')}>
-          <DownloadIcon />
-          Export CSV
-        </a>
-      </div>
+          every="Every action"
+          value={filters.action}
+          choices={auditActions.map((action) => ({ value: action, label: auditActionLabels[action] }))}
+          isChoice={isAuditAction}
+          onChange={(action) => update({ action })}
+          className="sm:w-72"
+        />
+      </FilterBar>
 
       <PagedResults
         query={log}

@@ -1,9 +1,8 @@
 import { RESERVATION_LIST_PAGE_SIZE, reservationStatuses, type ReservationStatus } from '@chuckkey/core';
 import { useCallback, useMemo } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { DownloadIcon } from '../../../components/ui/icons';
+import { ChoiceFilter, FilterBar } from '../../../components/ui/filter-bar';
 import { PagedResults } from '../../../components/ui/paged-results';
 import { SelectField } from '../../../components/ui/select-field';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
@@ -44,7 +43,7 @@ export function ReservationsAdminView({ timeZone }: { timeZone: string | undefin
 
   return (
     <div className="flex flex-col gap-4">
-      <div role="search" aria-label="Filter the reservations" className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5 lg:items-end">
+      <FilterBar label="Filter the reservations" exportHref={timeZone ? reservationCsvHref(filters, timeZone) : undefined}>
         <TextField label="From" type="date" value={filters.from ?? ''} onChange={(event) => update({ from: event.target.value || undefined })} />
         <TextField label="To" type="date" value={filters.to ?? ''} onChange={(event) => update({ to: event.target.value || undefined })} />
         <SelectField label="Machine" value={filters.machineId ?? ''} onChange={(event) => update({ machineId: event.target.value || undefined })}>
@@ -55,28 +54,15 @@ export function ReservationsAdminView({ timeZone }: { timeZone: string | undefin
             </option>
           ))}
         </SelectField>
-        <SelectField
+        <ChoiceFilter
           label="Status"
-          value={filters.status ?? ''}
-          onChange={(event) => {
-            const value = event.target.value;
-            update({ status: isReservationStatus(value) ? value : undefined });
-          }}
-        >
-          <option value="">Every status</option>
-          {reservationStatuses.map((status) => (
-            <option key={status} value={status}>
-              {statusLabels[status]}
-            </option>
-          ))}
-        </SelectField>
-        {timeZone && (
-          <a href={reservationCsvHref(filters, timeZone)} download className={buttonClasses('secondary')}>
-            <DownloadIcon />
-            Export CSV
-          </a>
-        )}
-      </div>
+          every="Every status"
+          value={filters.status}
+          choices={reservationStatuses.map((status) => ({ value: status, label: statusLabels[status] }))}
+          isChoice={isReservationStatus}
+          onChange={(status) => update({ status })}
+        />
+      </FilterBar>
 
       <PagedResults
         query={list}
