@@ -16,6 +16,7 @@ export * from './stations/check-in';
 export * from './stations/day-rail';
 export * from './board/schemas';
 export * from './board/state';
+export * from './board/state-icons';
 export * from './tag-outs/schemas';
 export * from './live/link';
 export * from './reservations/ics';

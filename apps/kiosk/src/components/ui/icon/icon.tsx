@@ -1,3 +1,4 @@
+import { boardStateIcons } from '@chuckkey/core';
 import type { ReactNode } from 'react';
 
 export type IconName =
@@ -30,12 +31,7 @@ const shapes: Record<IconName, ReactNode> = {
     </>
   ),
   'camera-off': <path d="M3 3l18 18M9.5 5.5h4l1.5 2h3.5a1.5 1.5 0 0 1 1.5 1.5v8M17.5 19.5h-13A1.5 1.5 0 0 1 3 18V9a1.5 1.5 0 0 1 1.5-1.5h2M10 10.5a3 3 0 0 0 4 4" />,
-  check: (
-    <>
-      <circle cx="12" cy="12" r="9" />
-      <path d="M7.5 12.5l3 3 6-6.5" />
-    </>
-  ),
+  check: <path d={boardStateIcons.available} />,
   cross: (
     <>
       <circle cx="12" cy="12" r="9" />
@@ -53,22 +49,10 @@ const shapes: Record<IconName, ReactNode> = {
   wrench: <path d="M14.5 4.5a4.5 4.5 0 0 0-5.3 5.8L3.5 16a2 2 0 0 0 2.8 2.8l5.7-5.7a4.5 4.5 0 0 0 5.8-5.3l-2.6 2.6-2.3-.5-.5-2.3z" />,
   back: <path d="M15 5l-7 7 7 7" />,
   link: <path d="M10 14a4 4 0 0 0 5.7 0l3-3a4 4 0 0 0-5.7-5.7l-1 1M14 10a4 4 0 0 0-5.7 0l-3 3a4 4 0 0 0 5.7 5.7l1-1" />,
-  hourglass: <path d="M6 3h12M6 21h12M8 3c0 5 8 5 8 9s-8 4-8 9M16 3c0 5-8 5-8 9s8 4 8 9" />,
-  // A three-jaw chuck seen from the tailstock: the spindle is turning.
-  chuck: (
-    <>
-      <circle cx="12" cy="12" r="9" />
-      <circle cx="12" cy="12" r="2.5" />
-      <path d="M12 3v5.5M19.8 16.5l-4.8-2.8M4.2 16.5l4.8-2.8" />
-    </>
-  ),
-  padlock: (
-    <>
-      <rect x="5" y="11" width="14" height="10" rx="1.5" />
-      <path d="M8 11V8a4 4 0 0 1 8 0v3M12 15v2.5" />
-    </>
-  ),
-  unplugged: <path d="M9 2.5v4M15 2.5v4M7 6.5h10v4a5 5 0 0 1-10 0zM12 15.5V21M3 3l18 18" />,
+  hourglass: <path d={boardStateIcons.reserved} />,
+  chuck: <path d={boardStateIcons.in_use} />,
+  padlock: <path d={boardStateIcons.tagged_out} />,
+  unplugged: <path d={boardStateIcons.offline} />,
 };
 
 /** Line icons beside the words of a state, never instead of them. */
