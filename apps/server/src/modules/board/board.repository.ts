@@ -1,6 +1,7 @@
 import type { ClosureDays, MachineCategory, WeeklyHours } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 import { preparedRows } from '../../lib/prepared';
+import { closuresJson, WEEKLY_HOURS_JSON } from '../shop/shop-hours.sql';
 
 /** What decides one machine's tile, as read from the database; names stay here, not in answers. */
 export interface MachineTileRow {
@@ -73,16 +74,8 @@ with tiles as (
 )
 select
   (select json_build_object('name', name, 'timeZone', time_zone) from shop where id = 1) as shop,
-  (
-    select coalesce(json_agg(json_build_object(
-      'weekday', h.weekday, 'opensAt', to_char(h.opens_at, 'HH24:MI'), 'closesAt', to_char(h.closes_at, 'HH24:MI'))), '[]')
-    from shop_hours h
-  ) as "weeklyHours",
-  (
-    select coalesce(json_agg(json_build_object('startsOn', c.starts_on, 'endsOn', c.ends_on, 'reason', c.reason)), '[]')
-    from shop_closures c
-    where c.ends_on >= current_date - 1 and c.starts_on <= current_date + 1
-  ) as closures,
+  ${WEEKLY_HOURS_JSON} as "weeklyHours",
+  ${closuresJson(1)} as closures,
   (
     select json_build_object('firstName', p.first_name, 'lastName', p.last_name)
     from duty_shifts d join members p on p.id = d.member_id

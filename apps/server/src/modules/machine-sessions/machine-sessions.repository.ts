@@ -1,6 +1,7 @@
 import { OPENING_LOOKAHEAD_DAYS, type ChecklistItem, type ClosureDays, type MachineCategory, type Role, type SignOffLevel, type WeeklyHours } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 import { preparedRows } from '../../lib/prepared';
+import { closuresJson, WEEKLY_HOURS_JSON } from '../shop/shop-hours.sql';
 import type { StationRecord } from '../stations/stations.repository';
 
 export type EndedBy = 'member' | 'supervisor' | 'admin' | 'heartbeat' | 'next_member';
@@ -172,16 +173,8 @@ select
     from tag_outs t
     where t.machine_id = (select id from machine) and t.cleared_at is null
   ) as "taggedOut",
-  (
-    select coalesce(json_agg(json_build_object(
-      'weekday', h.weekday, 'opensAt', to_char(h.opens_at, 'HH24:MI'), 'closesAt', to_char(h.closes_at, 'HH24:MI'))), '[]')
-    from shop_hours h
-  ) as "weeklyHours",
-  (
-    select coalesce(json_agg(json_build_object('startsOn', c.starts_on, 'endsOn', c.ends_on, 'reason', c.reason)), '[]')
-    from shop_closures c
-    where c.ends_on >= current_date - 1 and c.starts_on <= current_date + ${CLOSURE_DAYS_AHEAD}
-  ) as "closures",
+  ${WEEKLY_HOURS_JSON} as "weeklyHours",
+  ${closuresJson(CLOSURE_DAYS_AHEAD)} as "closures",
   (
     -- The range test is the one the exclusion constraint's GiST index serves (machine, range), so
     -- this stays a probe of a few rows however many reservations the machine has had.
