@@ -41,7 +41,7 @@ describe('MyReservationsList', () => {
   it('sorts reservations into upcoming, past and no-shows, on the shop clock', () => {
     setup();
     expect(within(screen.getByRole('list', { name: 'Upcoming' })).getByText('Saturday 14 March, 9:00–11:00')).toBeTruthy();
-    expect(within(screen.getByRole('list', { name: 'Past' })).getByText('Checked in')).toBeTruthy();
+    expect(within(screen.getByRole('list', { name: 'Past and cancelled' })).getByText('Checked in')).toBeTruthy();
     expect(within(screen.getByRole('list', { name: 'No-shows' })).getByText('Thursday 5 March, 9:00–10:00')).toBeTruthy();
   });
 

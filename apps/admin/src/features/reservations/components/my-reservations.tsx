@@ -120,9 +120,9 @@ export function MyReservationsList({ reservations, timeZone, onCancel, onRelease
       </section>
       <section aria-labelledby="reservations-past" className="flex flex-col gap-2">
         <h3 id="reservations-past" className="text-lg font-bold text-neutral-900">
-          Past
+          Past and cancelled
         </h3>
-        {past.length === 0 ? <p className="text-neutral-700">No past reservations yet.</p> : <ul aria-labelledby="reservations-past">{past.map((r) => row(r, false))}</ul>}
+        {past.length === 0 ? <p className="text-neutral-700">No past or cancelled reservations yet.</p> : <ul aria-labelledby="reservations-past">{past.map((r) => row(r, false))}</ul>}
       </section>
       <section aria-labelledby="reservations-missed" className="flex flex-col gap-2">
         <h3 id="reservations-missed" className="text-lg font-bold text-neutral-900">
