@@ -22,6 +22,7 @@ import { tagOutsRoutes } from './modules/tag-outs/tag-outs.routes';
 import { badgesRoutes } from './modules/badges/badges.routes';
 import { boardRoutes } from './modules/board/board.routes';
 import { classesRoutes } from './modules/classes/classes.routes';
+import { cribRoutes } from './modules/crib/crib.routes';
 import { waiversRoutes } from './modules/waivers/waivers.routes';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { machinesRoutes } from './modules/machines/machines.routes';
@@ -77,6 +78,7 @@ export function createApp(deps: Deps) {
   api.use('/trainings', trainingsRoutes(deps));
   api.use('/teach', teachRoutes(deps));
   api.use('/audit', auditRoutes(deps));
+  api.use('/crib', cribRoutes(deps));
   api.use(machinesRoutes(deps));
   api.use(tagOutsRoutes(deps));
   api.use('/board', boardRoutes(deps));

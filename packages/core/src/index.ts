@@ -23,3 +23,5 @@ export * from './reservations/ics';
 export * from './reservations/rules';
 export * from './reservations/check-in-window';
 export * from './reservations/classes';
+export * from './crib/schemas';
+export * from './crib/due';

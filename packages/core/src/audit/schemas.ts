@@ -27,6 +27,11 @@ export const auditActions = [
   'class.members_changed',
   'class.cancelled',
   'class.occurrence_cancelled',
+  'crib.item_created',
+  'crib.item_updated',
+  'crib.checked_out',
+  'crib.returned',
+  'crib.items_imported',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

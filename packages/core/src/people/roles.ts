@@ -51,6 +51,9 @@ export const permissions = [
   'cancel:reservation:any',
   'manage:class:any',
   'cancel:class:any',
+  'read:crib:any',
+  'read:crib-checkout:own',
+  'manage:crib:any',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -68,6 +71,9 @@ const memberPermissions: readonly Permission[] = [
   'create:tag-out:any',
   'create:reservation:own',
   'cancel:reservation:own',
+  // Members look up what the crib holds and what they have out; admins keep the crib and record loans.
+  'read:crib:any',
+  'read:crib-checkout:own',
 ];
 
 /**

@@ -35,6 +35,11 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'class.members_changed': 'Class members changed',
   'class.cancelled': 'Class cancelled',
   'class.occurrence_cancelled': 'Class meeting cancelled',
+  'crib.item_created': 'Crib item added',
+  'crib.item_updated': 'Crib item changed',
+  'crib.checked_out': 'Crib item checked out',
+  'crib.returned': 'Crib item returned',
+  'crib.items_imported': 'Crib inventory imported',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {
