@@ -1,6 +1,22 @@
 import type { BoardState } from './schemas';
 
 /**
+ * How every line icon of the station, the board and the web app is drawn: a 24 × 24 grid, stroked
+ * in the text colour with round caps and joins, no fill, and hidden from screen readers (the
+ * state's word beside it is what they read). Spread onto the `<svg>` element.
+ */
+export const lineIconSvg = {
+  viewBox: '0 0 24 24',
+  fill: 'none',
+  stroke: 'currentColor',
+  strokeWidth: 2.25,
+  strokeLinecap: 'round',
+  strokeLinejoin: 'round',
+  'aria-hidden': true,
+  focusable: false,
+} as const;
+
+/**
  * The line icon of each machine state, one SVG path on a 24 × 24 grid, to be stroked in the
  * text colour (round caps and joins, no fill). The station, the wall board and the web app draw
  * the same shapes, always beside the state's word: colour and shape never carry a state alone.

@@ -1,4 +1,4 @@
-import { boardStateIcons, type BoardMachine, type BoardState } from '@chuckkey/core';
+import { boardStateIcons, lineIconSvg, type BoardMachine, type BoardState } from '@chuckkey/core';
 import { machineStateDetail, machineStateLabels } from '../utils/machine-state';
 
 // Colour never carries the state alone: the word says it and the icon tells the states apart.
@@ -17,17 +17,7 @@ export function MachineStateLine({ machine, time }: { machine: BoardMachine; tim
   return (
     <p className={`flex flex-col gap-0.5 px-3 py-2 ${looks[machine.state]}`}>
       <span className="flex items-center gap-2">
-        <svg
-          viewBox="0 0 24 24"
-          fill="none"
-          stroke="currentColor"
-          strokeWidth={2.25}
-          strokeLinecap="round"
-          strokeLinejoin="round"
-          aria-hidden="true"
-          focusable="false"
-          className="size-6 shrink-0"
-        >
+        <svg {...lineIconSvg} className="size-6 shrink-0">
           <path d={boardStateIcons[machine.state]} />
         </svg>
         <span className="text-lg font-bold">{machineStateLabels[machine.state]}</span>

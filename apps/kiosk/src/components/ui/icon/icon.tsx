@@ -1,4 +1,4 @@
-import { boardStateIcons } from '@chuckkey/core';
+import { boardStateIcons, lineIconSvg } from '@chuckkey/core';
 import type { ReactNode } from 'react';
 
 export type IconName =
@@ -58,17 +58,7 @@ const shapes: Record<IconName, ReactNode> = {
 /** Line icons beside the words of a state, never instead of them. */
 export function Icon({ name, className }: { name: IconName; className?: string }) {
   return (
-    <svg
-      viewBox="0 0 24 24"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth={2.25}
-      strokeLinecap="round"
-      strokeLinejoin="round"
-      aria-hidden="true"
-      focusable="false"
-      className={`shrink-0 ${className ?? 'size-10'}`}
-    >
+    <svg {...lineIconSvg} className={`shrink-0 ${className ?? 'size-10'}`}>
       {shapes[name]}
     </svg>
   );
