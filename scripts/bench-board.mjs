@@ -9,9 +9,8 @@ import { randomBytes } from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { done, fail, step } from './lib/log.mjs';
-import { freePort } from './lib/postgres.mjs';
-import { throwawayStack } from './lib/bench.mjs';
-import { healthy, prepareDatabase, root, spawnService, waitFor } from './lib/stack.mjs';
+import { startBenchServer, throwawayStack } from './lib/bench.mjs';
+import { prepareDatabase, root } from './lib/stack.mjs';
 
 const RATE = 20;
 const SECONDS = 30;
@@ -64,22 +63,7 @@ async function main() {
   const badgeSecret = randomBytes(32).toString('hex');
   await prepareDatabase(started.url, { seed: true, env: { BADGE_SECRET: badgeSecret } });
 
-  step('Starting the server (production mode)');
-  const port = await freePort();
-  const server = stack.track(spawnService('server', ['src/main.ts'], {
-    NODE_ENV: 'production',
-    LOG_LEVEL: 'warn',
-    HOST: '127.0.0.1',
-    PORT: String(port),
-    DATABASE_URL: started.url,
-    SESSION_SECRET: randomBytes(32).toString('hex'),
-    BADGE_SECRET: badgeSecret,
-    SERVE_APPS: 'false',
-    COOKIE_SECURE: 'false',
-  }));
-  const base = `http://127.0.0.1:${port}`;
-  await waitFor(() => healthy(base), server, 'the server');
-  done(`server on ${base}`);
+  const base = await startBenchServer(stack, { badgeSecret });
 
   // The demo shop's admin pairs one board; every client below is that board's screen.
   const admin = await signIn(base, 'admin@example.org', 'chuckkey-demo');

@@ -6,11 +6,10 @@ import { randomBytes } from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { done, fail, step } from './lib/log.mjs';
-import { freePort } from './lib/postgres.mjs';
-import { percentile, throwawayStack } from './lib/bench.mjs';
+import { percentile, startBenchServer, throwawayStack } from './lib/bench.mjs';
 import { leanConnection } from './lib/lean-http.mjs';
 import { run } from './lib/run.mjs';
-import { healthy, prepareDatabase, root, spawnService, waitFor } from './lib/stack.mjs';
+import { prepareDatabase, root } from './lib/stack.mjs';
 
 const RATE = 200;
 const OPEN_LOOP_SECONDS = 30;
@@ -46,23 +45,7 @@ async function main() {
   const { badges, stations } = JSON.parse(readFileSync(output, 'utf8'));
   done(`seeded ${badges.length} badges and ${stations.length} stations`);
 
-  step('Starting the server (production mode)');
-  const port = await freePort();
-  const server = stack.track(spawnService('server', ['src/main.ts'], {
-    NODE_ENV: 'production',
-    LOG_LEVEL: 'warn',
-    HOST: '127.0.0.1',
-    PORT: String(port),
-    DATABASE_URL: databaseUrl,
-    SESSION_SECRET: randomBytes(32).toString('hex'),
-    BADGE_SECRET: badgeSecret,
-    SERVE_APPS: 'false',
-    COOKIE_SECURE: 'false',
-    STATION_SCAN_LIMIT_PER_MINUTE: '1000000',
-  }));
-  const base = `http://127.0.0.1:${port}`;
-  await waitFor(() => healthy(base), server, 'the server');
-  done(`server on ${base}`);
+  const base = await startBenchServer(stack, { badgeSecret, env: { STATION_SCAN_LIMIT_PER_MINUTE: '1000000' } });
 
   // Each kiosk holds its own device cookie, as in the shop.
   const kiosks = stations.map((token) => ({ cookie: `chuckkey.station=${token}` }));

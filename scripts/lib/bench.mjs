@@ -3,8 +3,10 @@
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { randomBytes } from 'node:crypto';
+import { done, step } from './log.mjs';
 import { freePort } from './postgres.mjs';
-import { startCluster, stopChild } from './stack.mjs';
+import { healthy, spawnService, startCluster, stopChild, waitFor } from './stack.mjs';
 
 /** The nearest-rank percentile of sorted values (NaN for none). */
 export function percentile(sorted, p) {
@@ -47,4 +49,32 @@ export async function throwawayStack() {
     throw error;
   }
   return stack;
+}
+
+/**
+ * Starts the real server in production mode on a free port against the stack's database, tracked
+ * by the stack, and waits until it answers its health check. `env` adds to (or overrides) the
+ * settings every benchmark runs with. Resolves to the server's base URL.
+ */
+export async function startBenchServer(stack, { badgeSecret, env = {} }) {
+  step('Starting the server (production mode)');
+  const port = await freePort();
+  const server = stack.track(
+    spawnService('server', ['src/main.ts'], {
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'warn',
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      DATABASE_URL: stack.url,
+      SESSION_SECRET: randomBytes(32).toString('hex'),
+      BADGE_SECRET: badgeSecret,
+      SERVE_APPS: 'false',
+      COOKIE_SECURE: 'false',
+      ...env,
+    }),
+  );
+  const base = `http://127.0.0.1:${port}`;
+  await waitFor(() => healthy(base), server, 'the server');
+  done(`server on ${base}`);
+  return base;
 }
