@@ -38,7 +38,8 @@ function wallClock(instant: number, timeZone: string): { date: string; minutes: 
     });
     partsFormats.set(timeZone, format);
   }
-  const part = (type: string) => Number(format.formatToParts(instant).find((p) => p.type === type)?.value);
+  const parts = format.formatToParts(instant);
+  const part = (type: Intl.DateTimeFormatPartTypes) => Number(parts.find((p) => p.type === type)?.value);
   const date = new Date(Date.UTC(part('year'), part('month') - 1, part('day'))).toISOString().slice(0, 10);
   return { date, minutes: part('hour') * 60 + part('minute') };
 }
