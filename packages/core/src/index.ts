@@ -2,6 +2,7 @@ export * from './auth/schemas';
 export * from './people/roles';
 export * from './people/schemas';
 export * from './shop/schemas';
+export * from './shop/calendar';
 export * from './shop/hours';
 export * from './http/problem';
 export * from './csv/csv';

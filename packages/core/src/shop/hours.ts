@@ -1,5 +1,6 @@
 import { TZDate } from '@date-fns/tz';
 import type { Weekday } from './hours-schemas';
+import { calendarDateIso, parseCalendarDate, shiftCalendarDate, type CalendarDate } from './calendar';
 import { clockMinutes, clockTime, MINUTES_PER_DAY, weekdayNames, weekdays } from './hours-schemas';
 
 export * from './hours-schemas';
@@ -46,27 +47,6 @@ const ALL_DAY: readonly Span[] = [[0, MINUTES_PER_DAY]];
 /** Minutes on the shop's wall clock: [opens, closes). */
 type Span = readonly [number, number];
 
-interface CalendarDate {
-  year: number;
-  month: number;
-  day: number;
-}
-
-function parseDate(date: string): CalendarDate {
-  const [year, month, day] = date.split('-').map(Number);
-  return { year: year ?? 0, month: month ?? 1, day: day ?? 1 };
-}
-
-/** The calendar date `days` after `date`; plain calendar arithmetic, no time zone involved. */
-function addDays(date: CalendarDate, days: number): CalendarDate {
-  const moved = new Date(Date.UTC(date.year, date.month - 1, date.day + days));
-  return { year: moved.getUTCFullYear(), month: moved.getUTCMonth() + 1, day: moved.getUTCDate() };
-}
-
-function isoDate({ year, month, day }: CalendarDate): string {
-  return `${String(year).padStart(4, '0')}-${String(month).padStart(2, '0')}-${String(day).padStart(2, '0')}`;
-}
-
 /** ISO 8601 weekday of a calendar date: Monday 1 … Sunday 7. */
 function isoWeekday({ year, month, day }: CalendarDate): Weekday {
   return (((new Date(Date.UTC(year, month - 1, day)).getUTCDay() + 6) % 7) + 1) as Weekday;
@@ -75,7 +55,7 @@ function isoWeekday({ year, month, day }: CalendarDate): Weekday {
 /** The shop's calendar date at an instant, 'YYYY-MM-DD'. */
 export function shopDate(instant: Date, timeZone: string): string {
   const local = new TZDate(instant.getTime(), timeZone);
-  return isoDate({ year: local.getFullYear(), month: local.getMonth() + 1, day: local.getDate() });
+  return calendarDateIso({ year: local.getFullYear(), month: local.getMonth() + 1, day: local.getDate() });
 }
 
 /**
@@ -123,7 +103,7 @@ function spansOn(byWeekday: Map<number, Span[]>, noHoursSet: boolean, date: Cale
  */
 export function hoursOnDate(schedule: readonly WeeklyHours[], closures: readonly ClosureDays[], timeZone: string, date: Date | string): DayHours {
   const day = typeof date === 'string' ? date : shopDate(date, timeZone);
-  const calendar = parseDate(day);
+  const calendar = parseCalendarDate(day);
   const closure = closureOn(closures, day);
   const spans = closure ? [] : spansOn(spansByWeekday(schedule), schedule.length === 0, calendar);
   return {
@@ -176,8 +156,8 @@ export function shopHoursAt(schedule: readonly WeeklyHours[], closures: readonly
   const lastDay = OPENING_LOOKAHEAD_DAYS + 1;
   const timeline: Span[] = [];
   for (let offset = 0; offset <= lastDay; offset += 1) {
-    const date = addDays(today, offset);
-    if (closures.length > 0 && closureOn(closures, isoDate(date))) continue;
+    const date = shiftCalendarDate(today, offset);
+    if (closures.length > 0 && closureOn(closures, calendarDateIso(date))) continue;
     for (const [opens, closes] of spansOn(byWeekday, schedule.length === 0, date)) {
       timeline.push([offset * MINUTES_PER_DAY + opens, offset * MINUTES_PER_DAY + closes]);
     }
@@ -186,12 +166,12 @@ export function shopHoursAt(schedule: readonly WeeklyHours[], closures: readonly
   const horizon = (lastDay + 1) * MINUTES_PER_DAY;
 
   const instant = (minutes: number): Date => {
-    const date = addDays(today, Math.floor(minutes / MINUTES_PER_DAY));
+    const date = shiftCalendarDate(today, Math.floor(minutes / MINUTES_PER_DAY));
     const within = minutes - Math.floor(minutes / MINUTES_PER_DAY) * MINUTES_PER_DAY;
     return wallClockInstant(timeZone, date, Math.floor(within / 60), within % 60);
   };
 
-  const closure = closures.length > 0 ? closureOn(closures, isoDate(today)) : null;
+  const closure = closures.length > 0 ? closureOn(closures, calendarDateIso(today)) : null;
   const current = openings.find(([opens, closes]) => opens <= minute && minute < closes);
   if (current) return { open: true, opensAt: null, closesAt: current[1] >= horizon ? null : instant(current[1]), closure };
 

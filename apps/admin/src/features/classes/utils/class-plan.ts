@@ -1,6 +1,5 @@
-import { CLASS_MAX_CAPACITY, CLASS_MAX_WEEKS, CLASS_TITLE_MAX, weeklyOccurrences, type ClassDetail, type ClassOccurrence, type ClassOccurrenceTimes } from '@chuckkey/core';
+import { CLASS_MAX_CAPACITY, CLASS_MAX_WEEKS, CLASS_TITLE_MAX, wallTimeToInstant, weeklyOccurrences, type ClassDetail, type ClassOccurrence, type ClassOccurrenceTimes } from '@chuckkey/core';
 import { z } from 'zod';
-import { wallTimeToInstant } from '../../../lib/shop-clock';
 import type { ClassRequestBody } from '../api/create-class';
 
 const MINUTE = 60_000;

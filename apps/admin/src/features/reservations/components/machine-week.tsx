@@ -1,4 +1,4 @@
-import type { MachineDetail } from '@chuckkey/core';
+import { addCalendarDays, wallTimeToInstant, type MachineDetail } from '@chuckkey/core';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
@@ -8,7 +8,7 @@ import { useShopHours } from '../../shop/api/get-shop-hours';
 import { useCreateReservation } from '../api/create-reservation';
 import { useAvailability } from '../api/get-availability';
 import { useMyReservations } from '../api/get-my-reservations';
-import { addDays, calendarDateLabel, mondayOf, quotaLeft, wallTimeToInstant, weekSlots, type Slot } from '../utils/week-slots';
+import { calendarDateLabel, mondayOf, quotaLeft, weekSlots, type Slot } from '../utils/week-slots';
 import { ReserveForm } from './reserve-form';
 import { WeekView } from './week-view';
 
@@ -23,7 +23,7 @@ export function MachineWeek({ machine, timeZone }: MachineWeekProps) {
   const [monday, setMonday] = useState(thisMonday);
   const [chosen, setChosen] = useState<Slot | null>(null);
   const from = wallTimeToInstant(monday, 0, timeZone)?.toISOString();
-  const to = wallTimeToInstant(addDays(monday, 7), 0, timeZone)?.toISOString();
+  const to = wallTimeToInstant(addCalendarDays(monday, 7), 0, timeZone)?.toISOString();
   const availability = useAvailability(machine.id, from, to);
   const hours = useShopHours();
   const mine = useMyReservations();
@@ -43,11 +43,11 @@ export function MachineWeek({ machine, timeZone }: MachineWeekProps) {
     taken: availability.data.taken,
     now: new Date(),
   });
-  const lastDay = addDays(hours.data.today.date, rules.horizonDays);
+  const lastDay = addCalendarDays(hours.data.today.date, rules.horizonDays);
   const all = mine.data ? [...mine.data.upcoming, ...mine.data.past] : [];
   const quotaWeek = chosen ? mondayOf(chosen.start, timeZone) : monday;
   const moveWeek = (weeks: number) => {
-    setMonday(addDays(monday, weeks * 7));
+    setMonday(addCalendarDays(monday, weeks * 7));
     setChosen(null);
   };
 
@@ -58,7 +58,7 @@ export function MachineWeek({ machine, timeZone }: MachineWeekProps) {
           <Button variant="secondary" onClick={() => moveWeek(-1)} disabled={monday <= thisMonday}>
             Previous week
           </Button>
-          <Button variant="secondary" onClick={() => moveWeek(1)} disabled={addDays(monday, 7) > lastDay}>
+          <Button variant="secondary" onClick={() => moveWeek(1)} disabled={addCalendarDays(monday, 7) > lastDay}>
             Next week
           </Button>
         </div>

@@ -1,6 +1,5 @@
-import { reservationStatuses, type ReservationStatus } from '@chuckkey/core';
+import { addCalendarDays, reservationStatuses, wallTimeToInstant, type ReservationStatus } from '@chuckkey/core';
 import { apiHref, type QueryParams } from '../../../lib/api-client';
-import { addDays, wallTimeToInstant } from './week-slots';
 
 /** The admin list's filters as the address keeps them: days of the shop's calendar, both ends included. */
 export interface ReservationFilters {
@@ -50,7 +49,7 @@ export function reservationFiltersToSearchParams(filters: ReservationFilters): U
 export function reservationListQuery(filters: ReservationFilters, timeZone: string): QueryParams {
   return {
     from: filters.from ? wallTimeToInstant(filters.from, 0, timeZone)?.toISOString() : undefined,
-    to: filters.to ? wallTimeToInstant(addDays(filters.to, 1), 0, timeZone)?.toISOString() : undefined,
+    to: filters.to ? wallTimeToInstant(addCalendarDays(filters.to, 1), 0, timeZone)?.toISOString() : undefined,
     machineId: filters.machineId,
     status: filters.status,
     page: filters.page > 1 ? filters.page : undefined,

@@ -1,28 +1,11 @@
 import type { MyReservation } from '@chuckkey/core';
 import { describe, expect, it } from 'vitest';
-import { mondayOf, quotaLeft, wallTimeToInstant, weekSlots } from './week-slots';
+import { mondayOf, quotaLeft, weekSlots } from './week-slots';
 
 // Offsets and the dates the clocks change come from the IANA time zone database, read through
 // Intl: America/Chicago goes from CST (UTC−6) to CDT (UTC−5) at 2:00 on Sunday 8 March 2026.
 const CHICAGO = 'America/Chicago';
 const saturdayHours = [{ weekday: 6, opensAt: '09:00', closesAt: '12:00' }];
-
-describe('wallTimeToInstant', () => {
-  it('keeps 9:00 at 9:00 on the shop clock on both sides of the change (IANA tz database via Intl)', () => {
-    expect(wallTimeToInstant('2026-03-07', 9 * 60, CHICAGO)?.toISOString()).toBe('2026-03-07T15:00:00.000Z');
-    expect(wallTimeToInstant('2026-03-14', 9 * 60, CHICAGO)?.toISOString()).toBe('2026-03-14T14:00:00.000Z');
-  });
-
-  it('has no instant for a time the clocks skip, and the first of a repeated hour (IANA tz database via Intl)', () => {
-    expect(wallTimeToInstant('2026-03-08', 2 * 60 + 30, CHICAGO)).toBeNull();
-    // America/Chicago returns to CST at 2:00 on Sunday 1 November 2026: 1:30 happens twice, first at UTC−5.
-    expect(wallTimeToInstant('2026-11-01', 90, CHICAGO)?.toISOString()).toBe('2026-11-01T06:30:00.000Z');
-  });
-
-  it('reads midnight at the end of a day as the next day starting', () => {
-    expect(wallTimeToInstant('2026-03-07', 1440, CHICAGO)?.toISOString()).toBe('2026-03-08T06:00:00.000Z');
-  });
-});
 
 describe('mondayOf', () => {
   it("finds the Monday of the shop's week, not of UTC's (ISO 8601 weeks start on Monday)", () => {

@@ -1,7 +1,7 @@
-import { hoursOnDate, shopDate, weekdayNames, type ClosureDays, type MyReservation, type TakenRange, type Weekday, type WeeklyHours } from '@chuckkey/core';
-import { addDays, clockLabel, parseDate, wallTimeToInstant } from '../../../lib/shop-clock';
+import { addCalendarDays, hoursOnDate, parseCalendarDate, shopDate, wallTimeToInstant, weekdayNames, type ClosureDays, type MyReservation, type TakenRange, type Weekday, type WeeklyHours } from '@chuckkey/core';
+import { clockLabel } from '../../../lib/shop-clock';
 
-export { addDays, calendarDateLabel, clockLabel, durationLabel, spanLabel, startLabel, wallTimeToInstant } from '../../../lib/shop-clock';
+export { calendarDateLabel, clockLabel, durationLabel, spanLabel, startLabel } from '../../../lib/shop-clock';
 
 const MINUTE = 60_000;
 
@@ -35,14 +35,14 @@ export interface WeekDay {
 }
 
 function isoWeekday(date: string): Weekday {
-  const { year, month, day } = parseDate(date);
+  const { year, month, day } = parseCalendarDate(date);
   return (((new Date(Date.UTC(year, month - 1, day)).getUTCDay() + 6) % 7) + 1) as Weekday;
 }
 
 /** The Monday of the shop's week that holds `instant`, 'YYYY-MM-DD'. */
 export function mondayOf(instant: Date, timeZone: string): string {
   const date = shopDate(instant, timeZone);
-  return addDays(date, 1 - isoWeekday(date));
+  return addCalendarDays(date, 1 - isoWeekday(date));
 }
 
 const stateWords: Record<SlotState, string> = { free: 'free', taken: 'taken', class: 'held for a class', past: 'past' };
@@ -64,7 +64,7 @@ export interface WeekInput {
 export function weekSlots({ monday, timeZone, slotMinutes, weekly, closures, taken, now }: WeekInput): WeekDay[] {
   const claims = taken.map((range) => ({ start: Date.parse(range.start), until: Date.parse(range.blockedUntil), kind: range.kind, title: range.title ?? null }));
   return Array.from({ length: 7 }, (_, index) => {
-    const date = addDays(monday, index);
+    const date = addCalendarDays(monday, index);
     const hours = hoursOnDate(weekly, closures, timeZone, date);
     const name = weekdayNames[hours.weekday];
     const spans: [number, number][] =
@@ -103,7 +103,7 @@ function clockMinutesOf(time: string): number {
  */
 export function quotaLeft(mine: readonly MyReservation[], machineId: string, monday: string, timeZone: string, quotaMinutes: number): number {
   const weekStart = wallTimeToInstant(monday, 0, timeZone)?.getTime() ?? Number.NaN;
-  const weekEnd = wallTimeToInstant(addDays(monday, 7), 0, timeZone)?.getTime() ?? Number.NaN;
+  const weekEnd = wallTimeToInstant(addCalendarDays(monday, 7), 0, timeZone)?.getTime() ?? Number.NaN;
   const booked = mine
     .filter((r) => r.machineId === machineId && r.kind === 'member' && (r.status === 'active' || r.status === 'checked_in'))
     .reduce((sum, r) => sum + Math.max(0, Math.min(Date.parse(r.end), weekEnd) - Math.max(Date.parse(r.start), weekStart)) / MINUTE, 0);
