@@ -1,21 +1,17 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { reservationSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
-import { createWaiverVersion } from '@chuckkey/db/factories';
-import { browser, createTestContext, ownDatabase, recordingPublisher, type TestContext } from '../../test/harness';
-import { badgeHolder, welderReservedByInes, type BadgeHolder } from '../station/station.fixtures';
+import { browser, type TestContext } from '../../test/harness';
+import { badgeHolder, liveStationContext, minutesFromNow, welderReservedByInes, type BadgeHolder } from '../station/station.fixtures';
 
-// Waiver versions and opening hours are shop-wide, so these tests run on a database of their own.
 let ctx: TestContext;
-const changed: string[] = [];
+let changed: string[];
 beforeAll(async () => {
-  ctx = createTestContext({ DATABASE_URL: await ownDatabase('reservation_release') }, { live: recordingPublisher(changed) });
-  await createWaiverVersion(ctx.db);
+  ({ ctx, changed } = await liveStationContext('reservation_release'));
 });
 afterAll(() => ctx.close());
 
 const MINUTE = 60_000;
-const minutesFromNow = (minutes: number) => new Date(Date.now() + minutes * MINUTE);
 /** The next quarter hour at least `minutes` from now: reservations start on the machine's 15-minute steps. */
 function quarterAfter(minutes: number): Date {
   const at = minutesFromNow(minutes).getTime();

@@ -1,21 +1,17 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dayRailBounds, reservationCheckedInSchema, stationScanResultSchema, stationStateSchema } from '@chuckkey/core';
-import { createWaiverVersion } from '@chuckkey/db/factories';
-import { createTestContext, ownDatabase, recordingPublisher, type TestContext } from '../../test/harness';
-import { pairedDevice, welderReservedByInes } from './station.fixtures';
+import type { TestContext } from '../../test/harness';
+import { liveStationContext, minutesFromNow, pairedDevice, welderReservedByInes } from './station.fixtures';
 
-// Waiver versions and opening hours are shop-wide, so these tests run on a database of their own.
 let ctx: TestContext;
-const changed: string[] = [];
+let changed: string[];
 beforeAll(async () => {
-  ctx = createTestContext({ DATABASE_URL: await ownDatabase('reservation_check_in') }, { live: recordingPublisher(changed) });
-  await createWaiverVersion(ctx.db);
+  ({ ctx, changed } = await liveStationContext('reservation_check_in'));
 });
 afterAll(() => ctx.close());
 
 const MINUTE = 60_000;
-const minutesFromNow = (minutes: number) => new Date(Date.now() + minutes * MINUTE);
 
 /**
  * A paired welder station needing one training, Ines holding a reservation on it that starts

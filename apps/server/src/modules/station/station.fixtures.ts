@@ -1,10 +1,23 @@
 import { randomUUID } from 'node:crypto';
 import { STATION_COOKIE, type Role, type StationWithCode } from '@chuckkey/core';
 import { hashPassword } from '@chuckkey/db';
-import { createBadge, createMachine, createMember, createSignOff, createTraining, recordWaiver, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
-import { browser, signedIn, type TestContext } from '../../test/harness';
+import { createBadge, createMachine, createMember, createSignOff, createTraining, createWaiverVersion, recordWaiver, type CreatedMember, type MachineRow } from '@chuckkey/db/factories';
+import { browser, createTestContext, ownDatabase, recordingPublisher, signedIn, type TestContext } from '../../test/harness';
 
 type SignedIn = Awaited<ReturnType<typeof signedIn>>;
+
+/**
+ * A context on a database of its own (waiver versions and opening hours are shop-wide) with a
+ * waiver published, recording the machines announced live into `changed`.
+ */
+export async function liveStationContext(name: string): Promise<{ ctx: TestContext; changed: string[] }> {
+  const changed: string[] = [];
+  const ctx = createTestContext({ DATABASE_URL: await ownDatabase(name) }, { live: recordingPublisher(changed) });
+  await createWaiverVersion(ctx.db);
+  return { ctx, changed };
+}
+
+export const minutesFromNow = (minutes: number) => new Date(Date.now() + minutes * 60_000);
 
 /** An admin creates a station for a new machine through the API and gets its pairing code. */
 export async function createStation(ctx: TestContext): Promise<{ admin: SignedIn; machine: MachineRow; station: StationWithCode }> {
