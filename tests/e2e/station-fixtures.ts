@@ -1,6 +1,7 @@
+import { randomUUID } from 'node:crypto';
 import type { APIRequestContext, Page } from '@playwright/test';
 import { stationWithCodeSchema, type StationWithCode } from '@chuckkey/core';
-import { createWaiverVersion, recordWaiver, type CreatedMember } from '@chuckkey/db/factories';
+import { createBadge, createWaiverVersion, recordWaiver, type CreatedMember } from '@chuckkey/db/factories';
 import type { Knex } from 'knex';
 import { expect } from './fixtures';
 
@@ -63,4 +64,32 @@ export async function withCurrentWaiver(db: Knex, member: CreatedMember): Promis
   const version = newest?.max ?? created?.version ?? 1;
   await recordWaiver(db, { memberId: member.id, version, typedName: `${member.first_name} ${member.last_name}` });
   return created ? created.version : null;
+}
+
+/**
+ * The crib station of the browser tests: a crib station paired on the page, a member with a
+ * badge, and a bore gauge in the crib under its own asset tag (due back after its loan period).
+ * `cleanUp` removes the checkouts, audit entries, the tool and the station made for the test.
+ */
+export async function cribStationWithBoreGauge(page: Page, db: Knex, people: { admin: CreatedMember; member: CreatedMember }) {
+  const badge = await createBadge(db, { memberId: people.member.id, badgeSecret: badgeSecret() });
+  const assetTag = `BG-${randomUUID().slice(0, 6).toUpperCase()}`;
+  const [tool] = await db('crib_items')
+    .insert({ kind: 'tool', name: 'Telescoping bore gauge', asset_tag: assetTag, bin_location: 'Drawer 3', condition: 'good', loan_period_hours: 48 })
+    .returning<{ id: string; name: string }[]>(['id', 'name']);
+  if (!tool) throw new Error('the bore gauge was not stored');
+  const station = await createStationAsAdmin(page.request, people.admin, { kind: 'crib' });
+  await pairScreen(page, station.pairingCode);
+  return {
+    badge,
+    tool: { ...tool, assetTag },
+    station,
+    async cleanUp() {
+      await db('crib_checkouts').where({ item_id: tool.id }).delete();
+      const everyone = [people.admin.id, people.member.id];
+      await db('audit_log').where({ entity_id: tool.id }).orWhereIn('actor_id', everyone).orWhereIn('member_id', everyone).orWhere({ entity_id: station.id }).delete();
+      await db('crib_items').where({ id: tool.id }).delete();
+      await db('stations').where({ id: station.id }).delete();
+    },
+  };
 }

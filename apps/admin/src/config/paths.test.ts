@@ -44,4 +44,10 @@ describe('paths with ids', () => {
     expect(paths.signOffReport.getHref('expiring')).toBe('/people/sign-offs');
     expect(paths.signOffReport.getHref('expired')).toBe('/people/sign-offs?status=expired');
   });
+
+  it('names the chosen tools of a label sheet in its address, and none for every tool', () => {
+    expect(paths.cribLabels.getHref(['a1', 'b2'])).toBe('/crib/labels?items=a1%2Cb2');
+    expect(paths.cribLabels.getHref([])).toBe('/crib/labels');
+    expect(paths.cribLabels.getHref()).toBe('/crib/labels');
+  });
 });

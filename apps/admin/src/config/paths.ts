@@ -35,6 +35,14 @@ export const paths = {
   },
   auditLog: { path: '/people/audit-log', getHref: () => '/people/audit-log' },
   reservationsReport: { path: '/people/reservations', getHref: () => '/people/reservations' },
+  crib: { path: '/crib', getHref: () => '/crib' },
+  cribCheckouts: { path: '/crib/checkouts', getHref: () => '/crib/checkouts' },
+  cribAttention: { path: '/crib/attention', getHref: () => '/crib/attention' },
+  cribOverdue: { path: '/crib/overdue', getHref: () => '/crib/overdue' },
+  cribLabels: {
+    path: '/crib/labels',
+    getHref: (itemIds?: readonly string[]) => withQuery('/crib/labels', { items: itemIds?.length ? itemIds.join(',') : undefined }),
+  },
   setup: { path: '/setup', getHref: () => '/setup' },
   setupMachines: { path: '/setup/machines', getHref: () => '/setup/machines' },
   setupMachineNew: { path: '/setup/machines/new', getHref: () => '/setup/machines/new' },
@@ -51,6 +59,7 @@ export const paths = {
   setupStations: { path: '/setup/stations', getHref: () => '/setup/stations' },
   setupWaiver: { path: '/setup/waiver', getHref: () => '/setup/waiver' },
   setupHours: { path: '/setup/hours', getHref: () => '/setup/hours' },
+  setupPolicies: { path: '/setup/policies', getHref: () => '/setup/policies' },
   outbox: { path: '/outbox', getHref: () => '/outbox' },
 } as const;
 

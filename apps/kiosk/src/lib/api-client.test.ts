@@ -66,6 +66,19 @@ describe('kiosk API client', () => {
     expect(error).toMatchObject({ status: 401, code: 'wrong_pin', message: 'That PIN is not right. Try again.' });
   });
 
+  it('keeps the further members a problem carries, such as the basket line it names (RFC 9457 §3.2)', async () => {
+    const server = fakeServer(() =>
+      json(409, { type: '/problems/already_out', title: 'Conflict', status: 409, code: 'already_out', itemId: '5d1c1f0e-8a3b-4c55-9a4e-2f7d6b1c0a99' }, 'application/problem+json'),
+    );
+    const api = createApiClient(server.fetchImpl);
+
+    const error = await api.post('/station/crib/checkouts', {}).catch((e: unknown) => e);
+
+    expect(error).toBeInstanceOf(ApiError);
+    expect((error as ApiError).extension('itemId')).toBe('5d1c1f0e-8a3b-4c55-9a4e-2f7d6b1c0a99');
+    expect((error as ApiError).extension('reasons')).toBeUndefined();
+  });
+
   it('reports an unreachable server as status 0, network_error', async () => {
     const api = createApiClient(async () => {
       throw new TypeError('fetch failed');

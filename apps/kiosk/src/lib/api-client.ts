@@ -17,6 +17,11 @@ export class ApiError extends Error {
     if (this.problem) return this.problem.code;
     return this.status === 0 ? 'network_error' : `http_${this.status}`;
   }
+
+  /** A further member of the problem details (RFC 9457 §3.2), such as the basket line a refusal names. */
+  extension(name: string): unknown {
+    return this.problem ? (this.problem as Record<string, unknown>)[name] : undefined;
+  }
 }
 
 export function isApiError(error: unknown, status?: number): error is ApiError {
@@ -25,7 +30,8 @@ export function isApiError(error: unknown, status?: number): error is ApiError {
 
 async function readProblem(response: Response): Promise<Problem | null> {
   try {
-    const parsed = problemSchema.safeParse(await response.json());
+    // Loose: the members a route adds to the problem (RFC 9457 §3.2) are kept for `extension()`.
+    const parsed = problemSchema.loose().safeParse(await response.json());
     return parsed.success ? parsed.data : null;
   } catch {
     return null;

@@ -5,7 +5,7 @@ import { createLogger } from '../lib/logger';
 import { createMailer, type Mailer } from '../lib/mailer';
 import { quietPublisher } from '../realtime/publisher';
 import { createTestContext, type TestContext } from '../test/harness';
-import { RESERVATION_CLOCK, RESERVATION_CLOCK_CRON, SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, SILENT_STATIONS, SILENT_STATIONS_CRON, startJobs } from './jobs';
+import { CRIB_OVERDUE, CRIB_OVERDUE_CRON, RESERVATION_CLOCK, RESERVATION_CLOCK_CRON, SIGN_OFF_REMINDERS, SIGN_OFF_REMINDERS_CRON, SILENT_STATIONS, SILENT_STATIONS_CRON, startJobs } from './jobs';
 
 let ctx: TestContext;
 let mailer: Mailer;
@@ -37,6 +37,7 @@ describe('background jobs on pg-boss', () => {
       expect(schedules).toContainEqual(expect.objectContaining({ name: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timezone: 'UTC' }));
       expect(schedules).toContainEqual(expect.objectContaining({ name: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }));
       expect(schedules).toContainEqual(expect.objectContaining({ name: RESERVATION_CLOCK, cron: RESERVATION_CLOCK_CRON }));
+      expect(schedules).toContainEqual(expect.objectContaining({ name: CRIB_OVERDUE, cron: CRIB_OVERDUE_CRON }));
 
       const id = await jobs.boss.send(SIGN_OFF_REMINDERS, {});
       expect(id).not.toBeNull();

@@ -1,5 +1,6 @@
 import PgBoss from 'pg-boss';
 import type { Deps } from '../lib/deps';
+import { cribOverdueService } from '../modules/crib/crib-overdue.service';
 import { machineSessionsService } from '../modules/machine-sessions/machine-sessions.service';
 import { reservationJobsService } from '../modules/reservations/reservation-jobs.service';
 import { shopRepository } from '../modules/shop/shop.repository';
@@ -32,6 +33,16 @@ export const RESERVATION_CLOCK = 'reservation-clock';
  * concurrent run changes and sends nothing twice.
  */
 export const RESERVATION_CLOCK_CRON = '* * * * *';
+
+export const CRIB_OVERDUE = 'crib-overdue';
+
+/**
+ * Every 15 minutes: a tool's first reminder goes out within a quarter of an hour of it becoming
+ * overdue (often the shop's closing time, while the member may still be near), and the daily
+ * ones drift by no more than that. Running more often would only re-read the same few open
+ * checkouts. Each reminder is claimed in the database, so repeated or concurrent runs never send twice.
+ */
+export const CRIB_OVERDUE_CRON = '*/15 * * * *';
 
 export interface Jobs {
   boss: PgBoss;
@@ -72,8 +83,15 @@ export async function startJobs(deps: Deps, options: { schema?: string } = {}): 
     await reservationClock.announceTurns(now);
     await reservationClock.sendReminders(now);
   });
+  const cribOverdue = cribOverdueService(deps);
+  await boss.createQueue(CRIB_OVERDUE);
+  await boss.schedule(CRIB_OVERDUE, CRIB_OVERDUE_CRON, {});
+  await boss.work(CRIB_OVERDUE, async () => {
+    await cribOverdue.sendOverdueNotices(new Date());
+  });
   logger.info({ queue: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }, 'background jobs started');
   logger.info({ queue: RESERVATION_CLOCK, cron: RESERVATION_CLOCK_CRON }, 'background jobs started');
+  logger.info({ queue: CRIB_OVERDUE, cron: CRIB_OVERDUE_CRON }, 'background jobs started');
   logger.info({ queue: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timeZone }, 'background jobs started');
 
   return {

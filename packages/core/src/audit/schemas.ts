@@ -16,6 +16,7 @@ export const auditActions = [
   'shop.hours_changed',
   'shop.closure_added',
   'shop.closure_removed',
+  'shop.policies_changed',
   'machine.tagged_out',
   'machine.tag_out_cleared',
   'reservation.created',
@@ -32,6 +33,7 @@ export const auditActions = [
   'crib.checked_out',
   'crib.returned',
   'crib.items_imported',
+  'crib.item_restored',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

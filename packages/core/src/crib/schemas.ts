@@ -71,6 +71,8 @@ export const cribItemSchema = z.object({
   priceCents: z.number().int().nullable(),
   /** For a tool: in circulation and not out. For a consumable: in circulation and stock above zero. */
   available: z.boolean(),
+  /** A photo has been uploaded: GET /api/crib/items/:id/photo answers it. */
+  hasPhoto: z.boolean(),
 });
 export type CribItem = z.infer<typeof cribItemSchema>;
 
@@ -99,14 +101,38 @@ export const cribCheckoutSchema = z.object({
   itemKind: z.enum(cribItemKinds),
   itemName: z.string(),
   memberId: z.uuid(),
+  /** First and last name, so lists of checkouts read without a second look-up. */
+  memberName: z.string(),
   quantity: z.number().int(),
   checkedOutAt: z.string(),
   dueAt: z.string().nullable(),
   returnedAt: z.string().nullable(),
   returnCondition: cribConditionSchema.nullable(),
   returnNote: z.string().nullable(),
+  /** A consumable take: the price of one unit at the moment of the take, which its charge uses. Null for a tool. */
+  unitPriceCents: z.number().int().nullable(),
 });
 export type CribCheckout = z.infer<typeof cribCheckoutSchema>;
+
+/** GET /api/crib/attention: a tool out of circulation for its condition, with the return that reported it. */
+export const cribAttentionSchema = z.object({
+  itemId: z.uuid(),
+  name: z.string(),
+  assetTag: z.string(),
+  binLocation: z.string().nullable(),
+  condition: cribConditionSchema,
+  note: z.string().nullable(),
+  returnedAt: z.string().nullable(),
+  memberId: z.uuid().nullable(),
+  memberName: z.string().nullable(),
+});
+export type CribAttention = z.infer<typeof cribAttentionSchema>;
+
+/** POST /api/crib/items/:id/restore: a tool put back on the shelf after its repair or check. */
+export const cribRestoreInputSchema = z.object({
+  note: optionalText(1000),
+});
+export type CribRestoreInput = z.infer<typeof cribRestoreInputSchema>;
 
 export const cribCheckoutsQuerySchema = z.object({
   open: z.enum(['true', 'false']).optional().transform((value) => value === 'true'),
@@ -133,3 +159,19 @@ export const cribCsvColumns = [
   'reorder_level',
   'price_cents',
 ] as const;
+
+/** GET /api/crib/overdue: a tool past its due time, most overdue first, with the reminders sent so far. */
+export const cribOverdueSchema = z.object({
+  checkoutId: z.uuid(),
+  itemId: z.uuid(),
+  itemName: z.string(),
+  assetTag: z.string(),
+  memberId: z.uuid(),
+  memberName: z.string(),
+  memberEmail: z.string(),
+  dueAt: z.string(),
+  overdueByHours: z.number(),
+  noticesSent: z.number().int(),
+  lastNoticeAt: z.string().nullable(),
+});
+export type CribOverdue = z.infer<typeof cribOverdueSchema>;

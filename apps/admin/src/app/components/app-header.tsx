@@ -21,6 +21,7 @@ const navItems: NavItem[] = [
   { label: 'Profile', to: paths.profile.getHref() },
   { label: 'Teach', to: paths.teach.getHref(), permission: 'create:sign-off:any' },
   { label: 'People', to: paths.people.getHref(), permission: 'read:member:any' },
+  { label: 'Crib', to: paths.crib.getHref(), permission: 'manage:crib:any' },
   { label: 'Setup', to: paths.setup.getHref(), permission: 'manage:machine:any' },
   { label: 'Outbox', to: paths.outbox.getHref(), permission: 'read:outbox:any' },
 ];

@@ -7,6 +7,7 @@ const items: { label: string; to: string; permission: Permission }[] = [
   { label: 'Trainings', to: paths.setupTrainings.getHref(), permission: 'manage:training:any' },
   { label: 'Stations', to: paths.setupStations.getHref(), permission: 'manage:station:any' },
   { label: 'Shop hours', to: paths.setupHours.getHref(), permission: 'manage:shop:any' },
+  { label: 'Policies', to: paths.setupPolicies.getHref(), permission: 'manage:shop:any' },
   { label: 'Waiver', to: paths.setupWaiver.getHref(), permission: 'manage:waiver:any' },
 ];
 

@@ -7,6 +7,7 @@ import { PhotoPanel } from '../../features/badges/components/photo-panel';
 import { PinForm } from '../../features/badges/components/pin-form';
 import { calendarFeedKeys, useCalendarFeedStatus } from '../../features/calendar-feed/api/get-calendar-feed-status';
 import { CalendarFeedPanel } from '../../features/calendar-feed/components/calendar-feed-panel';
+import { CribMinePanel } from '../../features/crib/components/crib-mine-panel';
 import { MyReservationsPanel } from '../../features/reservations/components/my-reservations-panel';
 import { useShop } from '../../features/shop/api/get-shop';
 import { SignOffList } from '../../features/sign-offs/components/sign-off-list';
@@ -25,7 +26,7 @@ export default function MyRecordRoute() {
 
   return (
     <>
-      <PageHeading title="My record" description="What you are signed off on, your reservations and classes, your badge and PIN, the shop's safety waiver, and your calendar feed." />
+      <PageHeading title="My record" description="What you are signed off on, your reservations and classes, what you have out from the crib, your badge and PIN, the shop's safety waiver, and your calendar feed." />
       {waiverMissing && (
         <Alert tone="warning" title="Your safety waiver is not on file">
           Stations clear you for no machine until you accept it.{' '}
@@ -48,6 +49,7 @@ export default function MyRecordRoute() {
             />
           </Panel>
           <MyReservationsPanel timeZone={timeZone} description="Machine time you reserved and the classes you are booked into. Reserve more on the Reserve page." />
+          <CribMinePanel timeZone={timeZone} />
           <WaiverPanel memberId={user.id} name={user.name} timeZone={timeZone} />
         </div>
         <div className="flex flex-col gap-6">

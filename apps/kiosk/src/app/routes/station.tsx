@@ -1,9 +1,23 @@
+import { CribStationScreens } from '@/features/crib-station/components/crib-station-screens';
 import { useShop } from '@/features/shop/api/get-shop';
 import { useStation } from '@/features/station/api/get-station';
+import { BadgeCamera } from '@/features/station/components/badge-camera';
+import { BadgeReader } from '@/features/station/components/badge-reader';
 import { PairScreen } from '@/features/station/components/pair-screen';
 import { SafetyLine } from '@/features/station/components/safety-line';
 import { StationScreens } from '@/features/station/components/station-screens';
+import { useHeartbeat } from '@/features/station/hooks/use-heartbeat';
+import { useStationLost } from '@/features/station/hooks/use-station-lost';
 import { isApiError } from '@/lib/api-client';
+
+const cribScanners = { BadgeReader, Camera: BadgeCamera };
+
+/** A station paired to the crib reports in and reads badges as a machine's station does. */
+function CribStation({ timeZone }: { timeZone: string }) {
+  useHeartbeat();
+  useStationLost();
+  return <CribStationScreens timeZone={timeZone} scanners={cribScanners} />;
+}
 
 export function Component() {
   const shop = useShop();
@@ -16,7 +30,11 @@ export function Component() {
     <div className="flex min-h-full flex-col">
       <title>Station · Chuckkey</title>
       {station.data && shop.data && !unpaired ? (
-        <StationScreens station={station.data} timeZone={shop.data.timeZone} />
+        station.data.kind === 'crib' ? (
+          <CribStation timeZone={shop.data.timeZone} />
+        ) : (
+          <StationScreens station={station.data} timeZone={shop.data.timeZone} />
+        )
       ) : (
         <>
           <header className="bg-brand px-8 py-4 text-white">

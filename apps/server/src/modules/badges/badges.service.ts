@@ -12,8 +12,8 @@ import { cardPdf, qrSvg, sheetPdf, type CardContent } from './badge-card';
 import { badgesRepository, type BadgeHolder, type BadgeRecord, type PhotoRecord } from './badges.repository';
 
 export const PHOTO_UPLOAD: UploadRule = { field: 'photo', maxBytes: PHOTO_MAX_BYTES, label: 'photo' };
-const PHOTO_TYPES = ['image/jpeg', 'image/png'] as const;
-const PHOTO_KINDS = 'a JPEG or PNG image';
+export const PHOTO_TYPES = ['image/jpeg', 'image/png'] as const;
+export const PHOTO_KINDS = 'a JPEG or PNG image';
 /** Large enough for a sharp card photo at 300 dpi (20 × 25 mm is about 240 × 300 px), small in the database. */
 export const PHOTO_MAX_SIDE = 600;
 // A small compressed file can still expand to a huge bitmap; refuse anything above 50 megapixels.

@@ -1,6 +1,7 @@
 import type { ClosureDays, MachineCategory, WeeklyHours } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 import { preparedRows } from '../../lib/prepared';
+import { openTagOutJson, runningSessionJson, SUPERVISOR_ON_DUTY_JSON } from '../machines/machine-live.sql';
 import { closuresJson, WEEKLY_HOURS_JSON } from '../shop/shop-hours.sql';
 
 /** What decides one machine's tile, as read from the database; names stay here, not in answers. */
@@ -36,15 +37,8 @@ export const BOARD_CLASSES = 6;
  */
 const tileColumns = `
   m.id, m.name, m.category,
-  (
-    select json_build_object('reason', t.reason, 'since', t.reported_at)
-    from tag_outs t where t.machine_id = m.id and t.cleared_at is null
-  ) as "tagOut",
-  (
-    select json_build_object('startedAt', s.started_at, 'firstName', p.first_name, 'lastName', p.last_name)
-    from machine_sessions s join members p on p.id = s.member_id
-    where s.machine_id = m.id and s.ended_at is null
-  ) as session,
+  ${openTagOutJson('m.id')} as "tagOut",
+  ${runningSessionJson('m.id')} as session,
   (
     select json_build_object('startsAt', r.starts_at, 'endsAt', r.ends_at, 'checkInMinutes', m.check_in_minutes)
     from reservations r
@@ -76,13 +70,7 @@ select
   (select json_build_object('name', name, 'timeZone', time_zone) from shop where id = 1) as shop,
   ${WEEKLY_HOURS_JSON} as "weeklyHours",
   ${closuresJson(1)} as closures,
-  (
-    select json_build_object('firstName', p.first_name, 'lastName', p.last_name)
-    from duty_shifts d join members p on p.id = d.member_id
-    where d.ended_at is null and p.active and p.role in ('instructor', 'admin')
-    order by d.started_at
-    limit 1
-  ) as supervisor,
+  ${SUPERVISOR_ON_DUTY_JSON} as supervisor,
   (
     select coalesce(json_agg(json_build_object('id', a.id, 'name', a.name, 'machines', area.machines) order by a.sort_order, a.name), '[]')
     from areas a

@@ -16,6 +16,13 @@ export interface CribItemRecord {
   reorderLevel: number | null;
   priceCents: number | null;
   out: boolean;
+  hasPhoto: boolean;
+}
+
+export interface CribPhotoRecord {
+  image: Buffer;
+  contentType: string;
+  updatedAt: Date;
 }
 
 export interface CribCheckoutRecord {
@@ -24,12 +31,14 @@ export interface CribCheckoutRecord {
   itemKind: 'tool' | 'consumable';
   itemName: string;
   memberId: string;
+  memberName: string;
   quantity: number;
   checkedOutAt: Date;
   dueAt: Date | null;
   returnedAt: Date | null;
   returnCondition: CribCondition | null;
   returnNote: string | null;
+  unitPriceCents: number | null;
 }
 
 export interface CribAttentionRecord {
@@ -41,6 +50,7 @@ export interface CribAttentionRecord {
   note: string | null;
   returnedAt: Date | null;
   memberId: string | null;
+  memberName: string | null;
 }
 
 const itemColumns = [
@@ -71,6 +81,7 @@ const checkoutColumns = [
   'c.returned_at as returnedAt',
   'c.return_condition as returnCondition',
   'c.return_note as returnNote',
+  'c.unit_price_cents as unitPriceCents',
 ];
 
 /** Each kind's own columns, the other kind's left null as the table's checks require. */
@@ -98,8 +109,13 @@ export function cribRepository(db: Db) {
     db({ i: 'crib_items' }).select(
       ...itemColumns,
       db.raw("exists (select 1 from crib_checkouts o where o.item_id = i.id and o.item_kind = 'tool' and o.returned_at is null) as out"),
+      db.raw('exists (select 1 from crib_item_photos p where p.item_id = i.id) as "hasPhoto"'),
     );
-  const checkouts = () => db({ c: 'crib_checkouts' }).join({ i: 'crib_items' }, 'i.id', 'c.item_id').select(checkoutColumns);
+  const checkouts = () =>
+    db({ c: 'crib_checkouts' })
+      .join({ i: 'crib_items' }, 'i.id', 'c.item_id')
+      .join({ m: 'members' }, 'm.id', 'c.member_id')
+      .select(...checkoutColumns, db.raw("m.first_name || ' ' || m.last_name as ??", ['memberName']));
 
   return {
     async listItems(): Promise<CribItemRecord[]> {
@@ -121,6 +137,22 @@ export function cribRepository(db: Db) {
     async updateItem(id: string, item: CribItemInput): Promise<boolean> {
       const changed = await db('crib_items').where({ id }).update({ ...itemRow(item), updated_at: db.fn.now() });
       return changed > 0;
+    },
+
+    async findPhoto(itemId: string): Promise<CribPhotoRecord | undefined> {
+      return db('crib_item_photos').first({ image: 'image', contentType: 'content_type', updatedAt: 'updated_at' }).where({ item_id: itemId });
+    },
+
+    async savePhoto(itemId: string, image: Buffer, contentType: string): Promise<void> {
+      await db('crib_item_photos')
+        .insert({ item_id: itemId, image, content_type: contentType, updated_at: db.fn.now() })
+        .onConflict('item_id')
+        .merge(['image', 'content_type', 'updated_at']);
+    },
+
+    /** False when the item had no photo. */
+    async deletePhoto(itemId: string): Promise<boolean> {
+      return (await db('crib_item_photos').where({ item_id: itemId }).delete()) > 0;
     },
 
     async memberExists(memberId: string): Promise<boolean> {
@@ -157,10 +189,32 @@ export function cribRepository(db: Db) {
           quantity: checkout.quantity,
           due_at: checkout.dueAt,
           recorded_by: checkout.recordedBy,
+          // The consumable's price read in the same statement as the take, so the charge is the price of that moment.
+          unit_price_cents: db.raw("(select price_cents from crib_items where id = ? and kind = 'consumable')", [checkout.itemId]),
         })
         .returning<{ id: string }[]>('id');
       if (!row) throw new Error('crib checkout insert returned no row');
       return row.id;
+    },
+
+    /** A tool by its asset tag as a scanner or a person gives it: case and surrounding spaces do not matter. */
+    async findToolByTag(tag: string): Promise<CribItemRecord | undefined> {
+      const wanted = tag.trim();
+      // Tags unique only by exact spelling could match twice; the exact spelling wins.
+      return items()
+        .where('i.kind', 'tool')
+        .whereRaw('lower(i.asset_tag) = lower(?)', [wanted])
+        .orderByRaw('(i.asset_tag = ?) desc', [wanted])
+        .first();
+    },
+
+    /** The open checkout of a tool, with the first name of the member who has it. */
+    async openCheckoutOfTool(itemId: string): Promise<{ id: string; memberId: string; memberFirstName: string; dueAt: Date } | undefined> {
+      return db({ c: 'crib_checkouts' })
+        .join({ m: 'members' }, 'm.id', 'c.member_id')
+        .first({ id: 'c.id', memberId: 'c.member_id', memberFirstName: 'm.first_name', dueAt: 'c.due_at' })
+        .where({ 'c.item_id': itemId, 'c.item_kind': 'tool' })
+        .whereNull('c.returned_at');
     },
 
     async findCheckout(id: string): Promise<CribCheckoutRecord | undefined> {
@@ -172,7 +226,7 @@ export function cribRepository(db: Db) {
       return db('crib_checkouts').first({ itemKind: 'item_kind', returnedAt: 'returned_at' }).where({ id }).forUpdate();
     },
 
-    async recordReturn(id: string, itemId: string, ret: { condition: CribCondition; note: string | null; recordedBy: string }): Promise<void> {
+    async recordReturn(id: string, itemId: string, ret: { condition: CribCondition; note: string | null; recordedBy: string | null }): Promise<void> {
       await db('crib_checkouts').where({ id }).update({
         returned_at: db.fn.now(),
         return_condition: ret.condition,
@@ -183,6 +237,12 @@ export function cribRepository(db: Db) {
       const item: Record<string, unknown> = { condition: ret.condition, updated_at: db.fn.now() };
       if (ret.condition !== 'good') item.in_circulation = false;
       await db('crib_items').where({ id: itemId }).update(item);
+    },
+
+    /** Marks a tool good and in circulation; false when no tool has that id. */
+    async restoreTool(id: string): Promise<boolean> {
+      const changed = await db('crib_items').where({ id, kind: 'tool' }).update({ condition: 'good', in_circulation: true, updated_at: db.fn.now() });
+      return changed > 0;
     },
 
     async openToolCheckouts(memberId?: string): Promise<CribCheckoutRecord[]> {
@@ -207,10 +267,12 @@ export function cribRepository(db: Db) {
           note: 'last.return_note',
           returnedAt: 'last.returned_at',
           memberId: 'last.member_id',
+          memberName: db.raw("m.first_name || ' ' || m.last_name"),
         })
         .joinRaw(
           'left join lateral (select c.return_note, c.returned_at, c.member_id from crib_checkouts c where c.item_id = i.id and c.returned_at is not null order by c.returned_at desc limit 1) last on true',
         )
+        .leftJoin({ m: 'members' }, 'm.id', 'last.member_id')
         .where('i.kind', 'tool')
         .whereIn('i.condition', ['needs_attention', 'damaged'])
         .orderBy('last.returned_at', 'desc');

@@ -1,8 +1,19 @@
 import { Router } from 'express';
-import { cribCheckoutInputSchema, cribCheckoutsQuerySchema, cribImportInputSchema, cribItemInputSchema, cribReturnInputSchema, idParamsSchema } from '@chuckkey/core';
+import {
+  cribCheckoutInputSchema,
+  cribCheckoutsQuerySchema,
+  cribImportInputSchema,
+  cribItemInputSchema,
+  cribRestoreInputSchema,
+  cribReturnInputSchema,
+  idParamsSchema,
+} from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
+import { singleUpload, uploadedFile } from '../../lib/uploads';
 import { parse } from '../../lib/validate';
 import { currentUser, requirePermission } from '../../middleware/auth';
+import { PHOTO_UPLOAD } from '../badges/badges.service';
+import { cribOverdueService } from './crib-overdue.service';
 import { cribService } from './crib.service';
 
 /** The tool crib from the web app: admins keep the inventory and record checkouts and returns. */
@@ -35,6 +46,32 @@ export function cribRoutes(deps: Deps): Router {
     res.json(await service.updateItem(currentUser(req), id, input));
   });
 
+  router.put('/items/:id/photo', requirePermission('manage:crib:any'), singleUpload(PHOTO_UPLOAD), async (req, res) => {
+    const { id } = parse(idParamsSchema, req.params, 'params');
+    res.json(await service.setPhoto(id, uploadedFile(req, PHOTO_UPLOAD)));
+  });
+
+  router.delete('/items/:id/photo', requirePermission('manage:crib:any'), async (req, res) => {
+    const { id } = parse(idParamsSchema, req.params, 'params');
+    await service.deletePhoto(id);
+    res.status(204).end();
+  });
+
+  // Any signed-in person may see what a tool looks like; the browser checks back before reusing it.
+  router.get('/items/:id/photo', requirePermission('read:crib:any'), async (req, res) => {
+    const { id } = parse(idParamsSchema, req.params, 'params');
+    const photo = await service.photo(id);
+    res.type(photo.contentType).setHeader('Cache-Control', 'private, no-cache');
+    res.setHeader('Last-Modified', photo.updatedAt.toUTCString());
+    res.send(photo.image);
+  });
+
+  router.post('/items/:id/restore', requirePermission('manage:crib:any'), async (req, res) => {
+    const { id } = parse(idParamsSchema, req.params, 'params');
+    const input = parse(cribRestoreInputSchema, req.body ?? {}, 'body');
+    res.json(await service.restoreItem(currentUser(req), id, input));
+  });
+
   router.get('/checkouts', requirePermission('manage:crib:any'), async (req, res) => {
     const { open } = parse(cribCheckoutsQuerySchema, req.query, 'query');
     res.json(await service.checkouts(open));
@@ -49,6 +86,10 @@ export function cribRoutes(deps: Deps): Router {
     const { id } = parse(idParamsSchema, req.params, 'params');
     const input = parse(cribReturnInputSchema, req.body, 'body');
     res.json(await service.returnItem(currentUser(req), id, input));
+  });
+
+  router.get('/overdue', requirePermission('manage:crib:any'), async (_req, res) => {
+    res.json(await cribOverdueService(deps).overdue(new Date()));
   });
 
   router.get('/attention', requirePermission('manage:crib:any'), async (_req, res) => {

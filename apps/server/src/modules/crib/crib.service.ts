@@ -6,14 +6,17 @@ import {
   type CribItem,
   type CribItemInput,
   type CribItemPublic,
+  type CribRestoreInput,
   type CribReturnInput,
 } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
 import { badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
+import { sniffType } from '../../lib/uploads';
 import { auditLog } from '../audit/audit.repository';
+import { normalizePhoto, PHOTO_KINDS, PHOTO_TYPES, PHOTO_UPLOAD } from '../badges/badges.service';
 import { shopRepository } from '../shop/shop.repository';
 import { cribItemsCsv, readCribItemsCsv } from './crib-csv';
-import { cribRepository, type CribCheckoutRecord, type CribItemRecord } from './crib.repository';
+import { cribRepository, type CribCheckoutRecord, type CribItemRecord, type CribPhotoRecord } from './crib.repository';
 
 const DAY_MS = 86_400_000;
 const FOREIGN_KEY_VIOLATION = '23503';
@@ -38,7 +41,7 @@ const toPublicItem = (item: CribItemRecord): CribItemPublic => ({
   binLocation: item.binLocation,
   available: available(item),
 });
-const toCheckout = (row: CribCheckoutRecord): CribCheckout => ({
+export const toCheckout = (row: CribCheckoutRecord): CribCheckout => ({
   ...row,
   checkedOutAt: row.checkedOutAt.toISOString(),
   dueAt: row.dueAt ? row.dueAt.toISOString() : null,
@@ -47,7 +50,9 @@ const toCheckout = (row: CribCheckoutRecord): CribCheckout => ({
 
 /**
  * The tool crib. Checkouts and returns take the person who records them as `actor`, so a crib
- * station's route can call the same service as the admins' web app.
+ * station's route can call the same service as the admins' web app; `context` adds to the audit
+ * entry's details where the change was made (a station says which). Given a transaction as `db`,
+ * each checkout becomes part of it, so several can land or fail together.
  */
 export function cribService({ db }: Deps) {
   return {
@@ -93,6 +98,53 @@ export function cribService({ db }: Deps) {
       });
     },
 
+    /**
+     * Checks the upload by its content and stores it as member photos are stored (oriented,
+     * at most 600 × 600, re-encoded as JPEG without metadata); on any refusal nothing is stored.
+     */
+    async setPhoto(itemId: string, data: Buffer): Promise<CribItem> {
+      const repository = cribRepository(db);
+      if (!(await repository.findItem(itemId))) throw itemNotFound();
+      await sniffType(data, PHOTO_TYPES, PHOTO_UPLOAD, PHOTO_KINDS);
+      await repository.savePhoto(itemId, await normalizePhoto(data), 'image/jpeg');
+      const item = await repository.findItem(itemId);
+      if (!item) throw itemNotFound();
+      return toItem(item);
+    },
+
+    async deletePhoto(itemId: string): Promise<void> {
+      const repository = cribRepository(db);
+      if (!(await repository.findItem(itemId))) throw itemNotFound();
+      await repository.deletePhoto(itemId);
+    },
+
+    async photo(itemId: string): Promise<CribPhotoRecord> {
+      const photo = await cribRepository(db).findPhoto(itemId);
+      if (!photo) throw notFound('no_photo', 'This crib item has no photo yet.');
+      return photo;
+    },
+
+    /** A tool back on the shelf after its repair or check: good condition, in circulation again. */
+    async restoreItem(actor: Express.User, id: string, input: CribRestoreInput): Promise<CribItem> {
+      return db.transaction(async (trx) => {
+        const repository = cribRepository(trx);
+        const before = await repository.findItem(id);
+        if (!before) throw itemNotFound();
+        if (before.kind !== 'tool') throw conflict('not_a_tool', 'Only a tool has a condition to put right; change a consumable under the inventory.');
+        if (!(await repository.restoreTool(id))) throw itemNotFound();
+        await auditLog(trx).record({
+          actorId: actor.id,
+          action: 'crib.item_restored',
+          entity: 'crib_item',
+          entityId: id,
+          details: { name: before.name, condition: before.condition, inCirculation: before.inCirculation, note: input.note },
+        });
+        const item = await repository.findItem(id);
+        if (!item) throw itemNotFound();
+        return toItem(item);
+      });
+    },
+
     async exportCsv(): Promise<string> {
       return cribItemsCsv((await cribRepository(db).listItems()).map(toItem));
     },
@@ -126,7 +178,7 @@ export function cribService({ db }: Deps) {
       });
     },
 
-    async checkOut(actor: Express.User, input: CribCheckoutInput, now = new Date()): Promise<CribCheckout> {
+    async checkOut(actor: Express.User, input: CribCheckoutInput, now = new Date(), context: Record<string, unknown> = {}): Promise<CribCheckout> {
       return db.transaction(async (trx) => {
         const repository = cribRepository(trx);
         const [item, memberExists] = await Promise.all([repository.findItem(input.itemId), repository.memberExists(input.memberId)]);
@@ -162,7 +214,7 @@ export function cribService({ db }: Deps) {
           action: 'crib.checked_out',
           entity: 'crib_item',
           entityId: item.id,
-          details: { checkoutId: id, name: item.name, quantity: input.quantity, dueAt: dueAt?.toISOString() ?? null },
+          details: { checkoutId: id, name: item.name, quantity: input.quantity, dueAt: dueAt?.toISOString() ?? null, ...context },
         });
         const checkout = await repository.findCheckout(id);
         if (!checkout) throw new Error('crib checkout vanished after insert');
@@ -170,7 +222,8 @@ export function cribService({ db }: Deps) {
       });
     },
 
-    async returnItem(actor: Express.User, checkoutId: string, input: CribReturnInput): Promise<CribCheckout> {
+    /** `actor` null: brought back at a station, where anyone may return a tool without a badge. */
+    async returnItem(actor: Express.User | null, checkoutId: string, input: CribReturnInput, context: Record<string, unknown> = {}): Promise<CribCheckout> {
       return db.transaction(async (trx) => {
         const repository = cribRepository(trx);
         const locked = await repository.lockCheckout(checkoutId);
@@ -179,14 +232,14 @@ export function cribService({ db }: Deps) {
         if (locked.returnedAt) throw conflict('already_returned', 'This checkout has already been returned.');
         const open = await repository.findCheckout(checkoutId);
         if (!open) throw checkoutNotFound();
-        await repository.recordReturn(checkoutId, open.itemId, { condition: input.condition, note: input.note, recordedBy: actor.id });
+        await repository.recordReturn(checkoutId, open.itemId, { condition: input.condition, note: input.note, recordedBy: actor?.id ?? null });
         await auditLog(trx).record({
-          actorId: actor.id,
+          actorId: actor?.id ?? null,
           memberId: open.memberId,
           action: 'crib.returned',
           entity: 'crib_item',
           entityId: open.itemId,
-          details: { checkoutId, name: open.itemName, condition: input.condition, note: input.note },
+          details: { checkoutId, name: open.itemName, condition: input.condition, note: input.note, ...context },
         });
         const returned = await repository.findCheckout(checkoutId);
         if (!returned) throw checkoutNotFound();

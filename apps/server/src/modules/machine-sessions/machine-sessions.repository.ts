@@ -1,6 +1,7 @@
 import { OPENING_LOOKAHEAD_DAYS, type ChecklistItem, type ClosureDays, type MachineCategory, type Role, type SignOffLevel, type WeeklyHours } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 import { preparedRows } from '../../lib/prepared';
+import { openTagOutJson, runningSessionJson, SUPERVISOR_ON_DUTY_JSON } from '../machines/machine-live.sql';
 import { closuresJson, WEEKLY_HOURS_JSON } from '../shop/shop-hours.sql';
 import type { StationRecord } from '../stations/stations.repository';
 
@@ -36,6 +37,10 @@ export interface ScanFacts {
    * machine's no-show grace to `now` plus its check-in window, earliest first (rule 6, check-in).
    */
   reservations: ScanReservation[];
+  /** The shop's rule 8 policy: days a crib tool may be overdue before machines refuse; null is off. */
+  overdueCheckoutBlockDays: number | null;
+  /** The member's tools out past their due time at the scan's instant, soonest due first; empty while the policy is off. */
+  overdueCheckouts: { itemName: string; dueAt: Date }[];
 }
 
 export interface ScanReservation {
@@ -78,7 +83,8 @@ export const TEACHERS_NAMED = 3;
  * three instructors who signed each off lately, the member's sign-offs for those trainings in any
  * state, a supervisor on duty, the machine's running session and open tag-out (rule 4), and the
  * shop's weekly hours and the closures around today (rule 7), and the machine's live reservations
- * near $5, the scan's instant (rule 6 and check-in). With no badge hash (null) the member parts come back empty. The
+ * near $5, the scan's instant (rule 6 and check-in), and the shop's overdue-tool policy with, while it is on, the
+ * member's crib tools out past their due time at $5 (rule 8). With no badge hash (null) the member parts come back empty. The
  * shop's time zone comes along for the wording of times and for deciding whether the shop is open.
  *
  * Two forms: by machine id, and by a station's device token hash, which also answers the station
@@ -156,23 +162,9 @@ select
     from sign_offs s
     where s.member_id = (select id from holder) and s.training_id in (select id from required)
   ) as "signOffs",
-  (
-    select json_build_object('firstName', p.first_name)
-    from duty_shifts d join members p on p.id = d.member_id
-    where d.ended_at is null and p.active and p.role in ('instructor', 'admin')
-    order by d.started_at
-    limit 1
-  ) as "supervisorOnDuty",
-  (
-    select json_build_object('id', s.id, 'memberId', s.member_id, 'memberFirstName', p.first_name, 'startedAt', s.started_at)
-    from machine_sessions s join members p on p.id = s.member_id
-    where s.machine_id = (select id from machine) and s.ended_at is null
-  ) as "runningSession",
-  (
-    select json_build_object('reason', t.reason, 'since', t.reported_at)
-    from tag_outs t
-    where t.machine_id = (select id from machine) and t.cleared_at is null
-  ) as "taggedOut",
+  ${SUPERVISOR_ON_DUTY_JSON} as "supervisorOnDuty",
+  ${runningSessionJson('(select id from machine)')} as "runningSession",
+  ${openTagOutJson('(select id from machine)')} as "taggedOut",
   ${WEEKLY_HOURS_JSON} as "weeklyHours",
   ${closuresJson(CLOSURE_DAYS_AHEAD)} as "closures",
   (
@@ -193,7 +185,17 @@ select
         $5::timestamptz - make_interval(mins => mm."noShowGraceMinutes"),
         $5::timestamptz + make_interval(mins => mm."checkInMinutes"), '[]')
       and r.ends_at > $5::timestamptz - make_interval(mins => mm."noShowGraceMinutes")
-  ) as "reservations"
+  ) as "reservations",
+  (select overdue_checkout_block_days from shop where id = 1) as "overdueCheckoutBlockDays",
+  (
+    -- Read only while the shop's policy is on (a one-time test before any row), then a probe of
+    -- the partial index of open tools by member: its due times and items, a few entries at most.
+    select coalesce(json_agg(json_build_object('itemName', i.name, 'dueAt', c.due_at) order by c.due_at), '[]')
+    from crib_checkouts c join crib_items i on i.id = c.item_id
+    where (select overdue_checkout_block_days from shop where id = 1) is not null
+      and c.member_id = (select id from holder) and c.item_kind = 'tool' and c.returned_at is null
+      and c.due_at < $5::timestamptz
+  ) as "overdueCheckouts"
 `;
 }
 
@@ -206,12 +208,14 @@ interface FactsRow {
   member: ScanFacts['member'];
   requiredTrainings: (Omit<ScanFacts['requiredTrainings'][number], 'nextClass'> & { nextClassAt: string | null })[];
   signOffs: { trainingId: string; level: SignOffLevel; expiresAt: string | null; revokedAt: string | null }[];
-  supervisorOnDuty: ScanFacts['supervisorOnDuty'];
-  runningSession: { id: string; memberId: string; memberFirstName: string; startedAt: string } | null;
+  supervisorOnDuty: { firstName: string; lastName: string } | null;
+  runningSession: { id: string; memberId: string; firstName: string; lastName: string; startedAt: string } | null;
   taggedOut: { reason: string; since: string } | null;
   weeklyHours: WeeklyHours[];
   closures: ClosureDays[];
   reservations: (Omit<ScanReservation, 'startsAt' | 'endsAt'> & { startsAt: string; endsAt: string })[];
+  overdueCheckoutBlockDays: number | null;
+  overdueCheckouts: { itemName: string; dueAt: string }[];
 }
 
 interface StationJson {
@@ -237,11 +241,15 @@ function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
     member: row.member,
     requiredTrainings: row.requiredTrainings.map(({ nextClassAt, ...training }) => ({ ...training, nextClass: date(nextClassAt) })),
     signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),
-    supervisorOnDuty: row.supervisorOnDuty,
-    runningSession: row.runningSession ? { ...row.runningSession, startedAt: new Date(row.runningSession.startedAt) } : null,
+    supervisorOnDuty: row.supervisorOnDuty ? { firstName: row.supervisorOnDuty.firstName } : null,
+    runningSession: row.runningSession
+      ? { id: row.runningSession.id, memberId: row.runningSession.memberId, memberFirstName: row.runningSession.firstName, startedAt: new Date(row.runningSession.startedAt) }
+      : null,
     weeklyHours: row.weeklyHours,
     closures: row.closures,
     reservations: row.reservations.map((r) => ({ ...r, startsAt: new Date(r.startsAt), endsAt: new Date(r.endsAt) })),
+    overdueCheckoutBlockDays: row.overdueCheckoutBlockDays,
+    overdueCheckouts: row.overdueCheckouts.map((c) => ({ itemName: c.itemName, dueAt: new Date(c.dueAt) })),
   };
 }
 

@@ -52,9 +52,10 @@ function hashOf(badge: string): string | null {
 }
 
 /**
- * The maintenance, crib and balance facts are empty because the shop keeps none of those records
- * yet; the rules for them are already in the decision. The open tag-out and the reservations are
- * read with the other facts. Whether the shop is open comes from its hours and closures, in its
+ * The maintenance and balance facts are empty because the shop keeps none of those records yet;
+ * the rules for them are already in the decision. The open tag-out, the reservations, and the
+ * shop's overdue-tool policy with the member's overdue crib tools (rule 8) are read with the other
+ * facts. Whether the shop is open comes from its hours and closures, in its
  * time zone.
  *
  * Rule 6 protects the machine for its check-in window before a reservation starts (10 minutes
@@ -88,7 +89,7 @@ function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['memb
       heldUntil: r.status === 'checked_in' ? r.endsAt : new Date(r.startsAt.getTime() + facts.machine.noShowGraceMinutes * 60_000),
     })),
     shopHours: shopHoursAt(facts.weeklyHours, facts.closures, timeZone, now),
-    policies: { overdueCheckoutBlockDays: null, overdueCheckouts: [], balanceLimitCents: null, balanceCents: 0 },
+    policies: { overdueCheckoutBlockDays: facts.overdueCheckoutBlockDays, overdueCheckouts: facts.overdueCheckouts, balanceLimitCents: null, balanceCents: 0 },
   };
 }
 

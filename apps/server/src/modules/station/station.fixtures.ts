@@ -58,6 +58,18 @@ export async function pairedBoard(ctx: TestContext) {
   return { admin, station, device, cookie: setCookie(res, STATION_COOKIE) };
 }
 
+/** A crib station's browser, paired with a new crib station; `cookie` is its device cookie. */
+export async function pairedCrib(ctx: TestContext) {
+  const admin = await signedIn(ctx, 'admin');
+  const created = await admin.post('/api/stations', { kind: 'crib' });
+  if (created.status !== 201) throw new Error(`crib station create failed: ${created.status} ${JSON.stringify(created.body)}`);
+  const station = created.body as StationWithCode;
+  const device = await browser(ctx);
+  const res = await device.post('/api/station/pair', { pairingCode: station.pairingCode });
+  if (res.status !== 200) throw new Error(`pairing failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { admin, station, device, cookie: setCookie(res, STATION_COOKIE) };
+}
+
 export interface BadgeHolder {
   member: CreatedMember;
   badge: string;

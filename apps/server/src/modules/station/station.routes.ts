@@ -19,6 +19,7 @@ import { parse, ValidationError, zodFieldErrors } from '../../lib/validate';
 import { currentStation, deviceKey, requireStation, setStationCookie, stationFromRequest } from '../../middleware/station-auth';
 import { badgesService } from '../badges/badges.service';
 import { machineNotFound, machineSessionsService, notAMachineStation, stationPhotoAllowed } from '../machine-sessions/machine-sessions.service';
+import { cribStationRoutes } from './crib-station.routes';
 import { reservationCheckInService } from './reservation-check-in.service';
 import { stationService } from './station.service';
 
@@ -86,6 +87,8 @@ export function stationRoutes(deps: Deps): Router {
   });
 
   router.use(requireStation(deps));
+
+  router.use('/crib', cribStationRoutes(deps));
 
   router.get('/', async (req, res) => {
     res.json(await service.self(currentStation(req).id));

@@ -24,6 +24,7 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'shop.hours_changed': 'Opening hours changed',
   'shop.closure_added': 'Closure added',
   'shop.closure_removed': 'Closure removed',
+  'shop.policies_changed': 'Shop policies changed',
   'machine.tagged_out': 'Machine tagged out',
   'machine.tag_out_cleared': 'Tag-out cleared',
   'reservation.created': 'Reservation made',
@@ -40,6 +41,7 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'crib.checked_out': 'Crib item checked out',
   'crib.returned': 'Crib item returned',
   'crib.items_imported': 'Crib inventory imported',
+  'crib.item_restored': 'Crib tool back in circulation',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {

@@ -14,7 +14,14 @@ const SECOND_READER_EVERY_MS = 400;
  * same video, jsQR. The whole frame is scanned (no qrbox), so a badge held anywhere in view is
  * read, whatever its size.
  */
-export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
+export function BadgeCamera({
+  onCode,
+  unavailableText = 'No camera here, or it is not allowed. Use a badge scanner or type the badge code.',
+}: {
+  onCode: (code: string) => void;
+  /** What to do instead when there is no camera: the crib's tags are typed as tags, not badge codes. */
+  unavailableText?: string;
+}) {
   const elementId = `badge-camera-${useId().replace(/[^A-Za-z0-9_-]/g, '')}`;
   const [status, setStatus] = useState<CameraStatus>('starting');
   // Starting and stopping a camera take time; each waits for the one before, so React's
@@ -110,7 +117,7 @@ export function BadgeCamera({ onCode }: { onCode: (code: string) => void }) {
           ) : (
             <>
               <Icon name="camera-off" className="size-9" />
-              <span>No camera here, or it is not allowed. Use a badge scanner or type the badge code.</span>
+              <span>{unavailableText}</span>
             </>
           )}
         </p>

@@ -1,7 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
-import { useBadgeWedge } from '../hooks/use-badge-wedge';
+import { useScannerWedge } from '@/hooks/use-scanner-wedge';
 import { BadgeCamera } from './badge-camera';
 import { TypedBadgeForm } from './typed-badge-form';
 
@@ -25,7 +25,7 @@ export function BadgeReader({ prompt, onBadge, busy = false, message, camera = t
   const accept = (code: string) => {
     if (!busy) onBadge(code);
   };
-  useBadgeWedge(accept, !typing);
+  useScannerWedge(accept, !typing);
 
   return (
     <div className="flex w-full flex-col items-center gap-5">

@@ -2,7 +2,7 @@ import type { StationScanResult } from '@chuckkey/core';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
-import { useIdleReturn } from '../hooks/use-idle-return';
+import { useIdleReturn } from '@/hooks/use-idle-return';
 import { RuleLadder } from './rule-ladder';
 
 // screens.md: the answer to a badge returns to idle by itself after 20 seconds without a touch.

@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
 import { useSetDuty } from '../api/set-duty';
-import { useIdleReturn } from '../hooks/use-idle-return';
+import { useIdleReturn } from '@/hooks/use-idle-return';
 import { stationMessage } from '../utils/messages';
 import { PinPad } from './pin-pad';
 

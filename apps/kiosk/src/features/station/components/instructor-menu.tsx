@@ -1,6 +1,6 @@
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
-import { useIdleReturn } from '../hooks/use-idle-return';
+import { useIdleReturn } from '@/hooks/use-idle-return';
 
 const MENU_IDLE_MS = 60_000;
 

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
 import { isApiError } from '@/lib/api-client';
 import { useStartSession } from '../api/start-session';
-import { useIdleReturn } from '../hooks/use-idle-return';
+import { useIdleReturn } from '@/hooks/use-idle-return';
 import { machineCautions, machineKind } from '../utils/cautions';
 import { isUnreachable } from '../utils/end-queue';
 import { stationMessage } from '../utils/messages';

@@ -6,7 +6,7 @@ import { isApiError } from '@/lib/api-client';
 import { useCreateSignOff } from '../api/create-sign-off';
 import { useLookupMember } from '../api/lookup-member';
 import { useVerifyInstructor } from '../api/verify-instructor';
-import { useIdleReturn } from '../hooks/use-idle-return';
+import { useIdleReturn } from '@/hooks/use-idle-return';
 import { stationMessage } from '../utils/messages';
 import { BadgeReader } from './badge-reader';
 import { PinPad } from './pin-pad';

@@ -12,7 +12,7 @@ import { useCheckInReservation } from '../api/check-in-reservation';
 import { useScanBadge } from '../api/scan-badge';
 import { useEndQueue } from '../hooks/use-end-queue';
 import { useHeartbeat } from '../hooks/use-heartbeat';
-import { useIdleReturn } from '../hooks/use-idle-return';
+import { useIdleReturn } from '@/hooks/use-idle-return';
 import { useStationLost } from '../hooks/use-station-lost';
 import { stationMessage } from '../utils/messages';
 import { reservationLine, reservationWarning } from '../utils/reservation-text';

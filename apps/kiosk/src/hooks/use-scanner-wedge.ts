@@ -1,5 +1,5 @@
 import { useEffect, useEffectEvent } from 'react';
-import { emptyBurst, feedKey } from '../utils/keystroke-burst';
+import { badgeScan, emptyBurst, feedKey, type ScanShape } from '@/lib/keystroke-burst';
 
 function isTypingTarget(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
@@ -7,10 +7,11 @@ function isTypingTarget(target: EventTarget | null): boolean {
 }
 
 /**
- * Listens for a USB or Bluetooth scanner that types the badge code and Enter. Keys typed into a
- * field are the field's, so the on-screen code field and the scanner never fight.
+ * Listens for a USB or Bluetooth scanner that types a code and Enter (a badge's, unless `shape`
+ * says otherwise). Keys typed into a field are the field's, so the on-screen code field and the
+ * scanner never fight.
  */
-export function useBadgeWedge(onCode: (code: string) => void, enabled = true) {
+export function useScannerWedge(onCode: (code: string) => void, enabled = true, shape: ScanShape = badgeScan) {
   const emit = useEffectEvent(onCode);
 
   useEffect(() => {
@@ -18,7 +19,7 @@ export function useBadgeWedge(onCode: (code: string) => void, enabled = true) {
     let burst = emptyBurst;
     const onKeyDown = (event: KeyboardEvent) => {
       if (isTypingTarget(event.target) || event.ctrlKey || event.altKey || event.metaKey) return;
-      const result = feedKey(burst, event.key, event.timeStamp);
+      const result = feedKey(burst, event.key, event.timeStamp, shape);
       burst = result.burst;
       if (result.code) {
         event.preventDefault();
@@ -27,5 +28,5 @@ export function useBadgeWedge(onCode: (code: string) => void, enabled = true) {
     };
     window.addEventListener('keydown', onKeyDown);
     return () => window.removeEventListener('keydown', onKeyDown);
-  }, [enabled]);
+  }, [enabled, shape]);
 }

@@ -7,7 +7,15 @@
 export const MAX_KEY_GAP_MS = 50;
 /** The shortest badge code (core's badgeCodeSchema): 22 base64url characters. */
 export const MIN_CODE_LENGTH = 22;
-const CODE_CHARACTER = /^[A-Za-z0-9_-]$/;
+
+/** What one kind of scanned code looks like: how short it may be and which characters it holds. */
+export interface ScanShape {
+  minLength: number;
+  character: RegExp;
+}
+
+/** A badge code: base64url, at least 22 characters. */
+export const badgeScan: ScanShape = { minLength: MIN_CODE_LENGTH, character: /^[A-Za-z0-9_-]$/ };
 
 export interface Burst {
   chars: string;
@@ -17,12 +25,12 @@ export interface Burst {
 export const emptyBurst: Burst = { chars: '', lastAt: Number.NEGATIVE_INFINITY };
 
 /** Feeds one key press (its `key` and time in ms) to the burst; gives a code when a scan ends. */
-export function feedKey(burst: Burst, key: string, at: number): { burst: Burst; code?: string } {
+export function feedKey(burst: Burst, key: string, at: number, shape: ScanShape = badgeScan): { burst: Burst; code?: string } {
   const fast = at - burst.lastAt <= MAX_KEY_GAP_MS;
   if (key === 'Enter') {
-    if (fast && burst.chars.length >= MIN_CODE_LENGTH) return { burst: emptyBurst, code: burst.chars };
+    if (fast && burst.chars.length >= shape.minLength) return { burst: emptyBurst, code: burst.chars };
     return { burst: emptyBurst };
   }
-  if (!CODE_CHARACTER.test(key)) return { burst: emptyBurst };
+  if (!shape.character.test(key)) return { burst: emptyBurst };
   return { burst: { chars: fast ? burst.chars + key : key, lastAt: at } };
 }

@@ -1,0 +1,63 @@
+import { Router, type RequestHandler } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { cribStationCheckoutInputSchema, cribStationMemberInputSchema, cribStationReturnInputSchema, cribTagLookupInputSchema } from '@chuckkey/core';
+import type { Deps } from '../../lib/deps';
+import { AppError } from '../../lib/errors';
+import { parse } from '../../lib/validate';
+import { currentStation, deviceKey } from '../../middleware/station-auth';
+import { cribStationService, notACribStation } from './crib-station.service';
+
+/**
+ * The crib station's device routes, mounted under /api/station/crib after the device check. Only
+ * a station paired to the crib may use them.
+ */
+export function cribStationRoutes(deps: Deps): Router {
+  const service = cribStationService(deps);
+  const router = Router();
+
+  const onlyCrib: RequestHandler = (req, _res, next) => {
+    next(currentStation(req).kind === 'crib' ? undefined : notACribStation());
+  };
+  // Badges are limited as at a machine's /scan, per device credential: far above a queue at the
+  // crib, well below a stuck scanner (STATION_SCAN_LIMIT_PER_MINUTE).
+  const badgeLimit = rateLimit({
+    windowMs: 60_000,
+    limit: deps.config.STATION_SCAN_LIMIT_PER_MINUTE,
+    standardHeaders: false,
+    legacyHeaders: false,
+    keyGenerator: deviceKey,
+    handler: (req, res, next) => {
+      const resetTime = (req as typeof req & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+      res.setHeader('Retry-After', String(Math.max(1, Math.ceil(((resetTime?.getTime() ?? Date.now() + 60_000) - Date.now()) / 1000))));
+      next(new AppError(429, 'too_many_requests', 'Too many scans at this station. Wait a minute and try again.'));
+    },
+  });
+
+  router.use(onlyCrib);
+
+  router.post('/member', badgeLimit, async (req, res) => {
+    const { badge } = parse(cribStationMemberInputSchema, req.body, 'body');
+    res.json(await service.member(badge, new Date()));
+  });
+
+  router.post('/items/lookup', async (req, res) => {
+    const { tag } = parse(cribTagLookupInputSchema, req.body, 'body');
+    res.json(await service.lookup(tag, new Date()));
+  });
+
+  router.get('/consumables', async (_req, res) => {
+    res.json(await service.consumables());
+  });
+
+  router.post('/checkouts', badgeLimit, async (req, res) => {
+    const input = parse(cribStationCheckoutInputSchema, req.body, 'body');
+    res.status(201).json({ checkouts: await service.checkOut(currentStation(req), input, new Date()) });
+  });
+
+  router.post('/returns', async (req, res) => {
+    const input = parse(cribStationReturnInputSchema, req.body, 'body');
+    res.json(await service.returnTool(currentStation(req), input));
+  });
+
+  return router;
+}
