@@ -49,6 +49,18 @@ export const demoCribConsumables: DemoConsumable[] = [
 /** The demo member has a 0–1 in micrometer out, due at 18:00 tomorrow on the shop's wall clock. */
 export const demoCribLoan = { assetTag: 'CK-0001', memberEmail: 'member@example.org', dueClock: '18:00' } as const;
 
+/** Another member kept a boring bar past closing two days ago, so the overdue list has something to show. */
+export const demoCribOverdue = { assetTag: 'CK-0030', daysAgo: 2, dueClock: '18:00' } as const;
+
+/** A helmet came back needing attention, so the attention list has something to show. */
+export const demoCribAttention = {
+  assetTag: 'CK-0061',
+  note: 'The lens stays dark for several seconds after the arc stops. Check the sensors and the battery.',
+} as const;
+
+/** The demo member took two turning inserts last week, at the price of the day. */
+export const demoCribTake = { name: 'Carbide turning insert, CCMT 32.51', quantity: 2, daysAgo: 6 } as const;
+
 export async function seed(knex: Knex): Promise<void> {
   // Seeding again leaves an existing crib as it is: its stock and checkouts are the shop's now.
   if (await knex('crib_items').first('id')) return;
@@ -81,7 +93,8 @@ export async function seed(knex: Knex): Promise<void> {
     knex('crib_items').first('id').where({ asset_tag: demoCribLoan.assetTag }),
   ]);
   if (!member || !tool) return;
-  const tomorrow = shopDate(new Date(Date.now() + DAY), timeZone);
+  const now = Date.now();
+  const tomorrow = shopDate(new Date(now + DAY), timeZone);
   await knex('crib_checkouts').insert({
     item_id: tool.id,
     item_kind: 'tool',
@@ -90,4 +103,54 @@ export async function seed(knex: Knex): Promise<void> {
     due_at: wallClockInstant(tomorrow, demoCribLoan.dueClock, timeZone),
     recorded_by: admin?.id ?? null,
   });
+
+  // The other scenes go to the first plain member (by e-mail) other than the demo member.
+  const [other, overdueTool, helmet, insert] = await Promise.all([
+    knex('members').first('id').where({ role: 'member', active: true }).whereNot({ id: member.id }).orderBy('email'),
+    knex('crib_items').first('id').where({ asset_tag: demoCribOverdue.assetTag }),
+    knex('crib_items').first('id').where({ asset_tag: demoCribAttention.assetTag }),
+    knex('crib_items').first('id', 'price_cents').where({ name: demoCribTake.name }),
+  ]);
+  if (other && overdueTool) {
+    const dueDay = shopDate(new Date(now - demoCribOverdue.daysAgo * DAY), timeZone);
+    const dueAt = wallClockInstant(dueDay, demoCribOverdue.dueClock, timeZone);
+    await knex('crib_checkouts').insert({
+      item_id: overdueTool.id,
+      item_kind: 'tool',
+      member_id: other.id,
+      quantity: 1,
+      checked_out_at: new Date(dueAt.getTime() - 3 * 3_600_000),
+      due_at: dueAt,
+      recorded_by: admin?.id ?? null,
+    });
+  }
+  if (other && helmet) {
+    const returnedAt = new Date(now - DAY);
+    await knex('crib_checkouts').insert({
+      item_id: helmet.id,
+      item_kind: 'tool',
+      member_id: other.id,
+      quantity: 1,
+      checked_out_at: new Date(returnedAt.getTime() - 4 * 3_600_000),
+      due_at: returnedAt,
+      returned_at: returnedAt,
+      return_condition: 'needs_attention',
+      return_note: demoCribAttention.note,
+      recorded_by: admin?.id ?? null,
+      returned_recorded_by: admin?.id ?? null,
+    });
+    await knex('crib_items').where({ id: helmet.id }).update({ condition: 'needs_attention', in_circulation: false });
+  }
+  if (insert) {
+    await knex('crib_checkouts').insert({
+      item_id: insert.id,
+      item_kind: 'consumable',
+      member_id: member.id,
+      quantity: demoCribTake.quantity,
+      unit_price_cents: insert.price_cents,
+      checked_out_at: new Date(now - demoCribTake.daysAgo * DAY),
+      recorded_by: admin?.id ?? null,
+    });
+    await knex('crib_items').where({ id: insert.id }).decrement('stock', demoCribTake.quantity);
+  }
 }
