@@ -4,7 +4,7 @@ import { expect, signOut, test } from './fixtures';
 const linksByRole: Record<Role, string[]> = {
   member: ['Shop floor', 'Reserve', 'My record', 'Profile'],
   instructor: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach'],
-  admin: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach', 'People', 'Setup', 'Outbox'],
+  admin: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach', 'People', 'Crib', 'Setup', 'Outbox'],
 };
 
 const article = (role: Role) => (role === 'admin' || role === 'instructor' ? 'an' : 'a');
