@@ -1,25 +1,6 @@
-import type { Page } from '@playwright/test';
-import type { CreatedMember } from '@chuckkey/db/factories';
 import { expectNoWcagViolations } from './axe';
-import { expect, test } from './fixtures';
-import { cribStationWithBoreGauge, typeBadge } from './station-fixtures';
-
-/**
- * A hand scanner types the tag and Enter a few milliseconds apart with no field focused; the
- * keys are sent from inside the page in one go, as the machine station's scanner test does.
- */
-async function scanTag(page: Page, tag: string) {
-  await page.evaluate((keys) => {
-    for (const key of keys) document.body.dispatchEvent(new KeyboardEvent('keydown', { key, bubbles: true }));
-  }, [...tag, 'Enter']);
-}
-
-/** Signs the admin in on the page's own request context, as the web app does (CSRF token first). */
-async function signInOnRequest(page: Page, admin: CreatedMember) {
-  const { token } = (await (await page.request.get('/api/auth/csrf')).json()) as { token: string };
-  const login = await page.request.post('/api/auth/login', { headers: { 'x-csrf-token': token }, data: { email: admin.email, password: admin.password } });
-  expect(login.status()).toBe(200);
-}
+import { expect, signIn, test } from './fixtures';
+import { cribStationWithBoreGauge, scanWithHandScanner, typeBadge } from './station-fixtures';
 
 test.describe('the crib station', () => {
   test('a member checks out a bore gauge and returns it damaged; it lands on the admins’ attention list', async ({ page, db, createUser }) => {
@@ -34,7 +15,7 @@ test.describe('the crib station', () => {
       await expect(page.getByRole('heading', { name: 'Hello, Rosalind' })).toBeVisible();
       await expect(page.getByRole('heading', { name: 'You have nothing out' })).toBeVisible();
 
-      await scanTag(page, crib.tool.assetTag);
+      await scanWithHandScanner(page, crib.tool.assetTag);
       const basket = page.getByRole('region', { name: 'Basket (1)' });
       const line = basket.getByRole('listitem').filter({ hasText: 'Telescoping bore gauge' });
       // The tool's loan period is 48 hours, so it is due back on a day named by its weekday.
@@ -68,12 +49,16 @@ test.describe('the crib station', () => {
       await page.getByRole('button', { name: 'Done' }).click();
       await expect(page.getByText('Hold your badge to the camera or scan it')).toBeVisible();
 
-      await signInOnRequest(page, admin);
-      const attention = await page.request.get('/api/crib/attention');
-      expect(attention.status()).toBe(200);
-      expect(await attention.json()).toContainEqual(
-        expect.objectContaining({ itemId: crib.tool.id, assetTag: crib.tool.assetTag, condition: 'damaged', note: 'The small gauge’s plunger sticks and one contact is bent.' }),
-      );
+      // The admin signs in to the web app in the same browser: the gauge waits on the attention list
+      // with the condition and note the member gave at the station.
+      await signIn(page, admin.email, admin.password);
+      await page.goto('/crib/attention');
+      await expect(page.getByRole('heading', { name: 'Needs attention', level: 1 })).toBeVisible();
+      const waiting = page.getByRole('table', { name: 'Tools that need attention' }).getByRole('row').filter({ hasText: crib.tool.assetTag });
+      await expect(waiting).toContainText('Telescoping bore gauge');
+      await expect(waiting).toContainText('Damaged');
+      await expect(waiting).toContainText('The small gauge’s plunger sticks and one contact is bent.');
+      await expect(waiting.getByRole('link', { name: /^Rosalind / })).toBeVisible();
     } finally {
       await crib.cleanUp();
     }

@@ -47,6 +47,18 @@ export async function removeStationRows(db: Knex, rows: { people: string[]; stat
   await db('areas').where({ id: rows.machine.area_id }).delete();
 }
 
+/**
+ * A hand scanner is a keyboard that types the code (a badge's or a tool's tag) and Enter a few
+ * milliseconds apart, with no field focused. The keys are sent from inside the page, all in one
+ * go: keys sent one by one from the test runner can arrive further apart than any scanner's on a
+ * busy machine.
+ */
+export async function scanWithHandScanner(page: Page, code: string): Promise<void> {
+  await page.evaluate((keys) => {
+    for (const key of keys) document.body.dispatchEvent(new KeyboardEvent('keydown', { key, bubbles: true }));
+  }, [...code, 'Enter']);
+}
+
 /** Uses the station's on-screen fallback: types the badge code as a member would. */
 export async function typeBadge(page: Page, code: string): Promise<void> {
   await page.getByRole('button', { name: 'Type badge code' }).click();

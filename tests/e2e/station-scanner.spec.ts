@@ -1,18 +1,6 @@
-import type { Page } from '@playwright/test';
 import { createBadge, createMachine } from '@chuckkey/db/factories';
 import { expect, test } from './fixtures';
-import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows } from './station-fixtures';
-
-/**
- * A hand scanner is a keyboard that types the code and Enter a few milliseconds apart, with no
- * field focused. The keys are sent from inside the page, all in one go: keys sent one by one
- * from the test runner can arrive further apart than any scanner's on a busy machine.
- */
-async function scan(page: Page, code: string) {
-  await page.evaluate((keys) => {
-    for (const key of keys) document.body.dispatchEvent(new KeyboardEvent('keydown', { key, bubbles: true }));
-  }, [...code, 'Enter']);
-}
+import { badgeSecret, createStationAsAdmin, pairScreen, removeStationRows, scanWithHandScanner } from './station-fixtures';
 
 test.describe('a station with a hand scanner', () => {
   test('a scanner typing an instructor’s badge code and Enter opens the instructor menu', async ({ page, db, createUser }) => {
@@ -26,7 +14,7 @@ test.describe('a station with a hand scanner', () => {
       stationId = station.id;
       await pairScreen(page, station.pairingCode);
 
-      await scan(page, badge.code);
+      await scanWithHandScanner(page, badge.code);
 
       await expect(page.getByRole('heading', { name: 'Instructor menu' })).toBeVisible();
       await expect(page.getByText('Hello, Cordelia.')).toBeVisible();
@@ -44,7 +32,7 @@ test.describe('a station with a hand scanner', () => {
       stationId = station.id;
       await pairScreen(page, station.pairingCode);
 
-      await scan(page, 'NoSuchBadgeCodeAnywhere0');
+      await scanWithHandScanner(page, 'NoSuchBadgeCodeAnywhere0');
 
       await expect(page.getByRole('heading', { name: 'This badge is not known here' })).toBeVisible();
       await page.getByRole('button', { name: 'Done' }).click();

@@ -10,6 +10,7 @@ export * from './csv/csv';
 export * from './trainings/expiry';
 export * from './trainings/schemas';
 export * from './badges/schemas';
+export * from './badges/qr';
 export * from './waivers/schemas';
 export * from './audit/schemas';
 export * from './stations/schemas';

@@ -1,5 +1,6 @@
+import { PHOTO_MAX_BYTES } from '@chuckkey/core';
 import { z } from 'zod';
-import { ApiError } from './api-client';
+import { api, ApiError, type UploadOptions } from './api-client';
 
 export interface UploadRules {
   maxBytes: number;
@@ -38,6 +39,22 @@ export function uploadFileSchema(rules: UploadRules) {
 
 export function formatMegabytes(bytes: number): string {
   return `${new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 }).format(bytes / (1024 * 1024))} MB`;
+}
+
+/** The server's limits for a photo, a member's or a crib item's alike. */
+export const photoRules: UploadRules = {
+  maxBytes: PHOTO_MAX_BYTES,
+  types: ['image/jpeg', 'image/png'],
+  missing: 'Choose a photo first.',
+  wrongType: 'Choose a JPEG or PNG picture. Phones can save or share a photo as JPEG.',
+  tooLarge: `That photo is larger than ${formatMegabytes(PHOTO_MAX_BYTES)}. Choose a smaller one, or save it at a lower resolution.`,
+};
+
+/** Sends one file as a multipart form, in the field the server reads it from. */
+export function sendFile<S extends z.ZodType | undefined = undefined>(path: string, field: string, file: File, options: Omit<UploadOptions<S>, 'body'> = {}) {
+  const body = new FormData();
+  body.append(field, file);
+  return api.upload<S>(path, { ...options, body });
 }
 
 /** Reads a picture into a data: address for a preview; the page's content policy allows those for images. */

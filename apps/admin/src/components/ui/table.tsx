@@ -1,4 +1,5 @@
 import type { ComponentProps, ReactNode } from 'react';
+import type { SortColumn, SortOrder } from '../../lib/table-sort';
 import { cn } from './cn';
 import { SortIcon } from './icons';
 
@@ -55,8 +56,6 @@ export function Td({ className, ...props }: ComponentProps<'td'>) {
   return <td className={cn('px-4 py-3 text-neutral-900', className)} {...props} />;
 }
 
-type SortOrder = 'asc' | 'desc';
-
 interface SortableThProps {
   label: string;
   /** The order when this column is the one sorted on; undefined when another column is. */
@@ -78,5 +77,32 @@ export function SortableTh({ label, order, onSort, className }: SortableThProps)
         <SortIcon direction={order ?? 'none'} className="size-4 shrink-0" />
       </button>
     </th>
+  );
+}
+
+interface SortableThsProps<F extends string> {
+  columns: readonly SortColumn<F>[];
+  /** The column the rows are sorted on now, and which way. */
+  sortedField: F;
+  order: SortOrder;
+  onSort: (field: F) => void;
+}
+
+/** The headings of every sortable column, the sorted one marked for screen readers by aria-sort. */
+export function SortableThs<F extends string>({ columns, sortedField, order, onSort }: SortableThsProps<F>) {
+  return columns.map((column) => (
+    <SortableTh key={column.field} label={column.label} order={sortedField === column.field ? order : undefined} onSort={() => onSort(column.field)} />
+  ));
+}
+
+/**
+ * The heading over a row's buttons, read out but not shown. Positioned, so the hidden heading
+ * stays inside the table's scrolling region on a phone.
+ */
+export function ActionsTh() {
+  return (
+    <Th className="relative">
+      <span className="sr-only">Actions</span>
+    </Th>
   );
 }

@@ -17,3 +17,12 @@ export function TextField({ label, hint, error, id, className, containerClassNam
     </FieldShell>
   );
 }
+
+/**
+ * A whole number typed in: phones show their number pad, and no autofill list covers it. A
+ * text box rather than type="number", so an empty box stays empty and a mouse wheel over it
+ * changes nothing; the form's schema reads the number.
+ */
+export function CountField(props: Omit<TextFieldProps, 'inputMode' | 'type'>) {
+  return <TextField inputMode="numeric" autoComplete="off" {...props} />;
+}

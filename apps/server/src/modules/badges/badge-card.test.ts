@@ -2,10 +2,10 @@ import { PDFDocument } from 'pdf-lib';
 import QRCode from 'qrcode';
 import sharp from 'sharp';
 import { describe, expect, it } from 'vitest';
-import { ID1_MM } from '@chuckkey/core';
+import { ID1_MM, QR_QUIET_ZONE_MODULES } from '@chuckkey/core';
 import { generateBadgeCode } from '@chuckkey/db';
 import { borderIsLight, decodeQr, filledRects, fromPng, pageContent, rasterize, type Rect } from '../../test/pdf-and-qr';
-import { CARD_HEIGHT_PT, CARD_WIDTH_PT, cardPdf, fontRuns, PAPER_PT, QR_QUIET_ZONE_MODULES, SHEET, sheetPdf, sheetSlots, type CardContent } from './badge-card';
+import { CARD_HEIGHT_PT, CARD_WIDTH_PT, cardPdf, fontRuns, PAPER_PT, SHEET, sheetPdf, sheetSlots, type CardContent } from './badge-card';
 
 const PT_TO_MM = 25.4 / 72;
 

@@ -3,7 +3,7 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
-import { ID1_MM, POINTS_PER_MM, type BadgeSheetQuery } from '@chuckkey/core';
+import { BADGE_QR_ERROR_CORRECTION, ID1_MM, POINTS_PER_MM, QR_QUIET_ZONE_MODULES, qrDrawing, type BadgeSheetQuery } from '@chuckkey/core';
 
 /**
  * The printable badge card: an ISO/IEC 7810 ID-1 card (85.60 × 53.98 mm) with the shop's name on
@@ -32,10 +32,6 @@ const MUTED = '#4b5563';
 const GUIDE = '#9ca3af';
 const PLACEHOLDER_FILL = '#e5e7eb';
 const PLACEHOLDER_FIGURE = '#9ca3af';
-
-/** ISO/IEC 18004: at least 4 light modules on every side of the symbol. */
-export const QR_QUIET_ZONE_MODULES = 4;
-export const QR_ERROR_CORRECTION = 'M' as const;
 
 // Card layout in millimetres, measured from the card's top-left corner.
 const layout = {
@@ -129,22 +125,10 @@ function line(doc: Doc, text: string, x: number, y: number, options: { weight: W
 
 /** The QR symbol as filled rectangles, one per horizontal run of dark modules, on a light square with its quiet zone. */
 function drawQr(doc: Doc, code: string, x: number, y: number, side: number): void {
-  const { modules } = QRCode.create(code, { errorCorrectionLevel: QR_ERROR_CORRECTION });
-  const count = modules.size + 2 * QR_QUIET_ZONE_MODULES;
-  const unit = side / count;
+  const { size, runs } = qrDrawing(QRCode.create(code, { errorCorrectionLevel: BADGE_QR_ERROR_CORRECTION }).modules);
+  const unit = side / size;
   doc.rect(x, y, side, side).fill('#ffffff');
-  for (let row = 0; row < modules.size; row++) {
-    let col = 0;
-    while (col < modules.size) {
-      if (!modules.get(row, col)) {
-        col++;
-        continue;
-      }
-      const start = col;
-      while (col < modules.size && modules.get(row, col)) col++;
-      doc.rect(x + (QR_QUIET_ZONE_MODULES + start) * unit, y + (QR_QUIET_ZONE_MODULES + row) * unit, (col - start) * unit, unit);
-    }
-  }
+  for (const run of runs) doc.rect(x + run.x * unit, y + run.y * unit, run.width * unit, unit);
   doc.fill('#000000');
 }
 
@@ -297,5 +281,5 @@ export async function sheetPdf(cards: CardContent[], paper: BadgeSheetQuery['pap
 
 /** The QR alone as SVG, for the web app's badge page. */
 export function qrSvg(code: string): Promise<string> {
-  return QRCode.toString(code, { type: 'svg', errorCorrectionLevel: QR_ERROR_CORRECTION, margin: QR_QUIET_ZONE_MODULES });
+  return QRCode.toString(code, { type: 'svg', errorCorrectionLevel: BADGE_QR_ERROR_CORRECTION, margin: QR_QUIET_ZONE_MODULES });
 }

@@ -1,16 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { cribItemSchema, PHOTO_MAX_BYTES } from '@chuckkey/core';
-import { createTestContext, signedIn, type Browser, type TestContext } from '../../test/harness';
+import { signedIn, type Browser } from '../../test/harness';
+import { cribFixtures } from './crib.fixtures';
 
-let ctx: TestContext;
-let admin: Browser & { member: { id: string } };
-beforeAll(async () => {
-  ctx = createTestContext();
-  admin = await signedIn(ctx, 'admin');
-});
-afterAll(() => ctx.close());
+const crib = cribFixtures();
 
 function upload(client: Browser, itemId: string, data: Buffer, file: { filename: string; contentType: string }) {
   return client.agent.put(`/api/crib/items/${itemId}/photo`).set('x-forwarded-for', client.ip).set('x-csrf-token', client.token).attach('photo', data, file);
@@ -19,27 +14,21 @@ function upload(client: Browser, itemId: string, data: Buffer, file: { filename:
 const png = (width: number, height: number) =>
   sharp({ create: { width, height, channels: 4, background: { r: 180, g: 40, b: 30, alpha: 1 } } }).png().toBuffer();
 
-async function tool() {
-  const res = await admin.post('/api/crib/items', { kind: 'tool', name: 'Telescoping bore gauge set', assetTag: `BG-${randomUUID().slice(0, 8)}`, binLocation: 'B2' });
-  expect(res.status).toBe(201);
-  return cribItemSchema.parse(res.body);
-}
-
-const storedPhotos = (itemId: string) => ctx.db('crib_item_photos').where({ item_id: itemId });
+const storedPhotos = (itemId: string) => crib.ctx.db('crib_item_photos').where({ item_id: itemId });
 
 describe('crib item photos', () => {
   it('stores a PNG, answers the item with hasPhoto, and serves the picture to a signed-in member', async () => {
-    const item = await tool();
+    const item = await crib.tool();
     expect(item.hasPhoto).toBe(false);
 
-    const res = await upload(admin, item.id, await png(800, 400), { filename: 'gauge.png', contentType: 'image/png' });
+    const res = await upload(crib.admin, item.id, await png(800, 400), { filename: 'gauge.png', contentType: 'image/png' });
 
     expect(res.status).toBe(200);
     expect(cribItemSchema.parse(res.body)).toMatchObject({ id: item.id, hasPhoto: true });
-    const listed = ((await admin.get('/api/crib/items')).body as unknown[]).map((row) => cribItemSchema.parse(row));
+    const listed = ((await crib.admin.get('/api/crib/items')).body as unknown[]).map((row) => cribItemSchema.parse(row));
     expect(listed.find((row) => row.id === item.id)?.hasPhoto).toBe(true);
 
-    const member = await signedIn(ctx, 'member');
+    const member = await signedIn(crib.ctx, 'member');
     const served = await member.get(`/api/crib/items/${item.id}/photo`).buffer(true);
     expect(served.status).toBe(200);
     // Stored as member photos are: at most 600 × 600 with the aspect ratio kept, re-encoded as JPEG.
@@ -52,9 +41,9 @@ describe('crib item photos', () => {
   });
 
   it('refuses a text file named .jpg with 415 unsupported_type, and stores nothing', async () => {
-    const item = await tool();
+    const item = await crib.tool();
 
-    const res = await upload(admin, item.id, Buffer.from('this is a parts list, not a picture\n'.repeat(40)), { filename: 'gauge.jpg', contentType: 'image/jpeg' });
+    const res = await upload(crib.admin, item.id, Buffer.from('this is a parts list, not a picture\n'.repeat(40)), { filename: 'gauge.jpg', contentType: 'image/jpeg' });
 
     expect(res.status).toBe(415);
     expect(res.headers['content-type']).toContain('application/problem+json');
@@ -64,10 +53,10 @@ describe('crib item photos', () => {
   });
 
   it('refuses a file over the member photos’ size limit with 413 too_large, and stores nothing', async () => {
-    const item = await tool();
+    const item = await crib.tool();
     const big = Buffer.concat([await png(50, 50), Buffer.alloc(PHOTO_MAX_BYTES)]);
 
-    const res = await upload(admin, item.id, big, { filename: 'big.png', contentType: 'image/png' });
+    const res = await upload(crib.admin, item.id, big, { filename: 'big.png', contentType: 'image/png' });
 
     expect(res.status).toBe(413);
     expect(res.body.code).toBe('too_large');
@@ -75,8 +64,8 @@ describe('crib item photos', () => {
   });
 
   it('refuses a member with 403 for setting or removing a photo', async () => {
-    const item = await tool();
-    const member = await signedIn(ctx, 'member');
+    const item = await crib.tool();
+    const member = await signedIn(crib.ctx, 'member');
 
     const put = await upload(member, item.id, await png(20, 20), { filename: 'p.png', contentType: 'image/png' });
     const remove = await member.delete(`/api/crib/items/${item.id}/photo`);
@@ -87,20 +76,20 @@ describe('crib item photos', () => {
   });
 
   it('removes the photo with 204, after which the item has none and the picture answers 404 no_photo', async () => {
-    const item = await tool();
-    await upload(admin, item.id, await png(40, 40), { filename: 'p.png', contentType: 'image/png' });
+    const item = await crib.tool();
+    await upload(crib.admin, item.id, await png(40, 40), { filename: 'p.png', contentType: 'image/png' });
 
-    const res = await admin.delete(`/api/crib/items/${item.id}/photo`);
+    const res = await crib.admin.delete(`/api/crib/items/${item.id}/photo`);
 
     expect(res.status).toBe(204);
     expect(await storedPhotos(item.id)).toHaveLength(0);
-    const photo = await admin.get(`/api/crib/items/${item.id}/photo`);
+    const photo = await crib.admin.get(`/api/crib/items/${item.id}/photo`);
     expect(photo.status).toBe(404);
     expect(photo.body.code).toBe('no_photo');
   });
 
   it('answers 404 crib_item_not_found for a photo of an item that does not exist', async () => {
-    const res = await upload(admin, randomUUID(), await png(20, 20), { filename: 'p.png', contentType: 'image/png' });
+    const res = await upload(crib.admin, randomUUID(), await png(20, 20), { filename: 'p.png', contentType: 'image/png' });
     expect(res.status).toBe(404);
     expect(res.body.code).toBe('crib_item_not_found');
   });

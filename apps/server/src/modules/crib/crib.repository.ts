@@ -155,8 +155,10 @@ export function cribRepository(db: Db) {
       return (await db('crib_item_photos').where({ item_id: itemId }).delete()) > 0;
     },
 
-    async memberExists(memberId: string): Promise<boolean> {
-      return Boolean(await db('members').first('id').where({ id: memberId }));
+    /** Whether the member's account is active; null when there is no such member. */
+    async memberActive(memberId: string): Promise<boolean | null> {
+      const row = await db('members').first('active').where({ id: memberId });
+      return row ? Boolean(row.active) : null;
     },
 
     /**

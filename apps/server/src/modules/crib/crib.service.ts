@@ -10,7 +10,7 @@ import {
   type CribReturnInput,
 } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
-import { badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
+import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
 import { sniffType } from '../../lib/uploads';
 import { auditLog } from '../audit/audit.repository';
 import { normalizePhoto, PHOTO_KINDS, PHOTO_TYPES, PHOTO_UPLOAD } from '../badges/badges.service';
@@ -27,6 +27,7 @@ const assetTagTaken = () => conflict('asset_tag_taken', 'Another tool already ha
 const alreadyOut = () => conflict('already_out', 'This tool is already checked out. It has to be returned first.');
 const shortStock = () => conflict('short_stock', 'There is not enough of this in stock.');
 const outOfCirculation = () => conflict('out_of_circulation', 'This item is out of circulation and cannot be checked out.');
+const memberInactive = () => new AppError(403, 'member_inactive', 'This member’s account is not active, so nothing can be checked out to them.');
 
 const available = (item: CribItemRecord) => item.inCirculation && (item.kind === 'tool' ? !item.out : (item.stock ?? 0) > 0);
 
@@ -181,9 +182,11 @@ export function cribService({ db }: Deps) {
     async checkOut(actor: Express.User, input: CribCheckoutInput, now = new Date(), context: Record<string, unknown> = {}): Promise<CribCheckout> {
       return db.transaction(async (trx) => {
         const repository = cribRepository(trx);
-        const [item, memberExists] = await Promise.all([repository.findItem(input.itemId), repository.memberExists(input.memberId)]);
+        const [item, memberActive] = await Promise.all([repository.findItem(input.itemId), repository.memberActive(input.memberId)]);
         if (!item) throw itemNotFound();
-        if (!memberExists) throw notFound('member_not_found', 'There is no member with that id.');
+        if (memberActive === null) throw notFound('member_not_found', 'There is no member with that id.');
+        // Refused as at the crib station: an inactive account takes nothing from the crib.
+        if (!memberActive) throw memberInactive();
         if (!item.inCirculation) throw outOfCirculation();
 
         let dueAt: Date | null = null;

@@ -1,8 +1,7 @@
 import { Router, type RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import { cribStationCheckoutInputSchema, cribStationMemberInputSchema, cribStationReturnInputSchema, cribTagLookupInputSchema } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
-import { AppError } from '../../lib/errors';
+import { perDeviceLimit, TOO_MANY_SCANS } from '../../lib/rate-limit';
 import { parse } from '../../lib/validate';
 import { currentStation, deviceKey } from '../../middleware/station-auth';
 import { cribStationService, notACribStation } from './crib-station.service';
@@ -20,18 +19,7 @@ export function cribStationRoutes(deps: Deps): Router {
   };
   // Badges are limited as at a machine's /scan, per device credential: far above a queue at the
   // crib, well below a stuck scanner (STATION_SCAN_LIMIT_PER_MINUTE).
-  const badgeLimit = rateLimit({
-    windowMs: 60_000,
-    limit: deps.config.STATION_SCAN_LIMIT_PER_MINUTE,
-    standardHeaders: false,
-    legacyHeaders: false,
-    keyGenerator: deviceKey,
-    handler: (req, res, next) => {
-      const resetTime = (req as typeof req & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-      res.setHeader('Retry-After', String(Math.max(1, Math.ceil(((resetTime?.getTime() ?? Date.now() + 60_000) - Date.now()) / 1000))));
-      next(new AppError(429, 'too_many_requests', 'Too many scans at this station. Wait a minute and try again.'));
-    },
-  });
+  const badgeLimit = perDeviceLimit(deps.config.STATION_SCAN_LIMIT_PER_MINUTE, TOO_MANY_SCANS, deviceKey);
 
   router.use(onlyCrib);
 

@@ -1,48 +1,32 @@
 import { randomUUID } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { cribCheckoutSchema, cribItemSchema, cribStationCheckoutResultSchema, cribStationConsumablesSchema, cribStationMemberResultSchema, cribTagLookupResultSchema } from '@chuckkey/core';
-import { createTestContext, signedIn, type Browser, type TestContext } from '../../test/harness';
+import { describe, expect, it } from 'vitest';
+import { cribCheckoutSchema, cribStationCheckoutResultSchema, cribStationConsumablesSchema, cribStationMemberResultSchema, cribTagLookupResultSchema } from '@chuckkey/core';
+import { createTestContext } from '../../test/harness';
 import { badgeHolder, pairedBoard, pairedCrib, pairedDevice } from './station.fixtures';
+import { cribFixtures } from '../crib/crib.fixtures';
 
-let ctx: TestContext;
-let admin: Browser & { member: { id: string } };
-beforeAll(async () => {
-  ctx = createTestContext();
-  admin = await signedIn(ctx, 'admin');
-});
-afterAll(() => ctx.close());
+const crib = cribFixtures();
 
 const HOUR = 3_600_000;
 
 /** A tool with its own loan period, so its due time is known whatever the shop's hours are. */
-async function tool(name = 'Telescoping bore gauge set') {
-  const assetTag = `CS-${randomUUID().slice(0, 8).toUpperCase()}`;
-  const res = await admin.post('/api/crib/items', { kind: 'tool', name, assetTag, binLocation: 'B2', loanPeriodHours: 4 });
-  expect(res.status).toBe(201);
-  return cribItemSchema.parse(res.body);
-}
-
-async function consumable(stock: number, priceCents = 375) {
-  const res = await admin.post('/api/crib/items', { kind: 'consumable', name: `Carbide insert ${randomUUID().slice(0, 4)}`, unit: 'each', stock, priceCents, binLocation: 'C4' });
-  expect(res.status).toBe(201);
-  return cribItemSchema.parse(res.body);
-}
+const tool = (name = 'Telescoping bore gauge set') => crib.tool({ name, loanPeriodHours: 4 });
 
 async function stock(itemId: string): Promise<number | null> {
-  const row = await ctx.db('crib_items').first('stock').where({ id: itemId });
+  const row = await crib.ctx.db('crib_items').first('stock').where({ id: itemId });
   return row?.stock ?? null;
 }
 
 async function openCheckouts(itemId: string) {
-  return ctx.db('crib_checkouts').where({ item_id: itemId }).whereNull('returned_at').select('id', 'member_id');
+  return crib.ctx.db('crib_checkouts').where({ item_id: itemId }).whereNull('returned_at').select('id', 'member_id');
 }
 
 describe('the crib station’s checkout', () => {
   it('shows the member what they have out, finds a tool by its tag in any case and checks out a basket of a tool and a consumable', async () => {
-    const { device, station } = await pairedCrib(ctx);
-    const member = await badgeHolder(ctx, 'member', { firstName: 'Ines' });
+    const { device, station } = await pairedCrib(crib.ctx);
+    const member = await badgeHolder(crib.ctx, 'member', { firstName: 'Ines' });
     const gauge = await tool();
-    const inserts = await consumable(10, 375);
+    const inserts = await crib.consumable(10, { priceCents: 375 });
 
     const before = cribStationMemberResultSchema.parse((await device.post('/api/station/crib/member', { badge: member.badge })).body);
     expect(before).toEqual({ member: { id: member.member.id, firstName: 'Ines' }, out: [] });
@@ -70,9 +54,9 @@ describe('the crib station’s checkout', () => {
     expect(checkouts[1]).toMatchObject({ itemId: inserts.id, quantity: 3, dueAt: null, unitPriceCents: 375 });
     expect(await stock(inserts.id)).toBe(7);
 
-    const audit = await ctx.db('audit_log').where({ action: 'crib.checked_out', entity_id: gauge.id }).first('actor_id', 'member_id', 'details');
+    const audit = await crib.ctx.db('audit_log').where({ action: 'crib.checked_out', entity_id: gauge.id }).first('actor_id', 'member_id', 'details');
     expect(audit).toMatchObject({ actor_id: member.member.id, member_id: member.member.id, details: { via: 'station', stationId: station.id } });
-    const recorded = await ctx.db('crib_checkouts').first('recorded_by').where({ id: checkouts[0]!.id });
+    const recorded = await crib.ctx.db('crib_checkouts').first('recorded_by').where({ id: checkouts[0]!.id });
     expect(recorded).toEqual({ recorded_by: member.member.id });
 
     const after = cribStationMemberResultSchema.parse((await device.post('/api/station/crib/member', { badge: member.badge })).body);
@@ -82,10 +66,10 @@ describe('the crib station’s checkout', () => {
   });
 
   it('marks a tool past its due time as overdue, and lists the soonest due first', async () => {
-    const { device } = await pairedCrib(ctx);
-    const member = await badgeHolder(ctx, 'member', { firstName: 'Jonas' });
+    const { device } = await pairedCrib(crib.ctx);
+    const member = await badgeHolder(crib.ctx, 'member', { firstName: 'Jonas' });
     const [late, later] = await Promise.all([tool('Thread pitch gauge'), tool('Boring bar, 3/8 in')]);
-    await ctx.db('crib_checkouts').insert([
+    await crib.ctx.db('crib_checkouts').insert([
       { item_id: later.id, item_kind: 'tool', member_id: member.member.id, quantity: 1, checked_out_at: new Date(Date.now() - 3 * HOUR), due_at: new Date(Date.now() + HOUR) },
       { item_id: late.id, item_kind: 'tool', member_id: member.member.id, quantity: 1, checked_out_at: new Date(Date.now() - 3 * HOUR), due_at: new Date(Date.now() - HOUR) },
     ]);
@@ -97,10 +81,10 @@ describe('the crib station’s checkout', () => {
   });
 
   it('takes nothing from a basket whose second tool is already out, and names that line', async () => {
-    const { device } = await pairedCrib(ctx);
-    const [ines, jonas] = await Promise.all([badgeHolder(ctx, 'member', { firstName: 'Ines' }), badgeHolder(ctx, 'member', { firstName: 'Jonas' })]);
+    const { device } = await pairedCrib(crib.ctx);
+    const [ines, jonas] = await Promise.all([badgeHolder(crib.ctx, 'member', { firstName: 'Ines' }), badgeHolder(crib.ctx, 'member', { firstName: 'Jonas' })]);
     const [free, taken] = await Promise.all([tool('Depth micrometer'), tool('Telescoping bore gauge set')]);
-    const inserts = await consumable(5);
+    const inserts = await crib.consumable(5);
     const first = await device.post('/api/station/crib/checkouts', { badge: jonas.badge, items: [{ itemId: taken.id, quantity: 1 }] });
     expect(first.status).toBe(201);
 
@@ -117,12 +101,12 @@ describe('the crib station’s checkout', () => {
     expect(await openCheckouts(free.id)).toEqual([]);
     expect(await stock(inserts.id)).toBe(5);
     expect(await openCheckouts(taken.id)).toEqual([expect.objectContaining({ member_id: jonas.member.id })]);
-    expect(await ctx.db('audit_log').where({ action: 'crib.checked_out', entity_id: free.id }).select('id')).toEqual([]);
+    expect(await crib.ctx.db('audit_log').where({ action: 'crib.checked_out', entity_id: free.id }).select('id')).toEqual([]);
   });
 
   it('of two baskets with the same tool sent at once from two crib stations, one lands whole and the other takes nothing', async () => {
-    const [east, west] = await Promise.all([pairedCrib(ctx), pairedCrib(ctx)]);
-    const [ines, jonas] = await Promise.all([badgeHolder(ctx, 'member', { firstName: 'Ines' }), badgeHolder(ctx, 'member', { firstName: 'Jonas' })]);
+    const [east, west] = await Promise.all([pairedCrib(crib.ctx), pairedCrib(crib.ctx)]);
+    const [ines, jonas] = await Promise.all([badgeHolder(crib.ctx, 'member', { firstName: 'Ines' }), badgeHolder(crib.ctx, 'member', { firstName: 'Jonas' })]);
     const [shared, ownA, ownB] = await Promise.all([tool('Parting blade holder'), tool('Center drill set'), tool('Dial indicator')]);
     const results = await Promise.all([
       east.device.post('/api/station/crib/checkouts', { badge: ines.badge, items: [{ itemId: ownA.id, quantity: 1 }, { itemId: shared.id, quantity: 1 }] }),
@@ -137,10 +121,10 @@ describe('the crib station’s checkout', () => {
   });
 
   it('takes nothing when a consumable’s stock is short, and names that line', async () => {
-    const { device } = await pairedCrib(ctx);
-    const member = await badgeHolder(ctx, 'member');
+    const { device } = await pairedCrib(crib.ctx);
+    const member = await badgeHolder(crib.ctx, 'member');
     const gauge = await tool();
-    const wire = await consumable(2);
+    const wire = await crib.consumable(2);
     const res = await device.post('/api/station/crib/checkouts', { badge: member.badge, items: [{ itemId: gauge.id, quantity: 1 }, { itemId: wire.id, quantity: 3 }] });
     expect(res.status).toBe(409);
     expect(res.body).toMatchObject({ code: 'short_stock', itemId: wire.id });
@@ -149,27 +133,27 @@ describe('the crib station’s checkout', () => {
   });
 
   it('names an unknown badge without a member, refuses it at checkout with 401, and an empty basket with 400', async () => {
-    const { device } = await pairedCrib(ctx);
+    const { device } = await pairedCrib(crib.ctx);
     const gauge = await tool();
     const stranger = 'A'.repeat(22);
     const lookup = await device.post('/api/station/crib/member', { badge: stranger });
     expect(lookup.status).toBe(200);
     expect(lookup.body).toEqual({ member: null, reason: 'unknown_badge' });
-    const inactive = await badgeHolder(ctx, 'member', { active: false });
+    const inactive = await badgeHolder(crib.ctx, 'member', { active: false });
     expect((await device.post('/api/station/crib/member', { badge: inactive.badge })).body).toEqual({ member: null, reason: 'member_inactive' });
 
     const res = await device.post('/api/station/crib/checkouts', { badge: stranger, items: [{ itemId: gauge.id, quantity: 1 }] });
     expect(res.status).toBe(401);
     expect(res.body.code).toBe('unknown_badge');
     expect(await openCheckouts(gauge.id)).toEqual([]);
-    const member = await badgeHolder(ctx, 'member');
+    const member = await badgeHolder(crib.ctx, 'member');
     const empty = await device.post('/api/station/crib/checkouts', { badge: member.badge, items: [] });
     expect(empty.status).toBe(400);
     expect(empty.body.errors.items).toBeDefined();
   });
 
   it('answers 404 crib_item_not_found for a tag no tool carries', async () => {
-    const { device } = await pairedCrib(ctx);
+    const { device } = await pairedCrib(crib.ctx);
     const res = await device.post('/api/station/crib/items/lookup', { tag: `NONE-${randomUUID().slice(0, 6)}` });
     expect(res.status).toBe(404);
     expect(res.body.code).toBe('crib_item_not_found');
@@ -178,9 +162,9 @@ describe('the crib station’s checkout', () => {
 
 describe('who may use the crib station’s routes', () => {
   it('refuses a machine station and a board with 403 not_a_crib_station, and an unpaired device with 401', async () => {
-    const machine = await pairedDevice(ctx);
-    const board = await pairedBoard(ctx);
-    const member = await badgeHolder(ctx, 'member');
+    const machine = await pairedDevice(crib.ctx);
+    const board = await pairedBoard(crib.ctx);
+    const member = await badgeHolder(crib.ctx, 'member');
     const answers = await Promise.all([
       machine.device.post('/api/station/crib/member', { badge: member.badge }),
       machine.device.get('/api/station/crib/consumables'),
@@ -191,7 +175,7 @@ describe('who may use the crib station’s routes', () => {
       [403, 'not_a_crib_station'],
       [403, 'not_a_crib_station'],
     ]);
-    const unpaired = await admin.get('/api/station/crib/consumables');
+    const unpaired = await crib.admin.get('/api/station/crib/consumables');
     expect(unpaired.status).toBe(401);
     expect(unpaired.body.code).toBe('station_required');
   });
@@ -215,7 +199,7 @@ describe('who may use the crib station’s routes', () => {
 
 describe('returns at the crib station', () => {
   async function lentAt(device: Awaited<ReturnType<typeof pairedCrib>>['device']) {
-    const member = await badgeHolder(ctx, 'member', { firstName: 'Ines' });
+    const member = await badgeHolder(crib.ctx, 'member', { firstName: 'Ines' });
     const gauge = await tool();
     const res = await device.post('/api/station/crib/checkouts', { badge: member.badge, items: [{ itemId: gauge.id, quantity: 1 }] });
     expect(res.status).toBe(201);
@@ -223,20 +207,20 @@ describe('returns at the crib station', () => {
   }
 
   it('takes a tool returned damaged out of circulation and onto the admins’ attention list, recorded by the station', async () => {
-    const { device, station } = await pairedCrib(ctx);
+    const { device, station } = await pairedCrib(crib.ctx);
     const { gauge, checkout } = await lentAt(device);
     const res = await device.post('/api/station/crib/returns', { tag: gauge.assetTag, condition: 'damaged', note: 'The anvil of the small gauge is bent.' });
     expect(res.status).toBe(200);
     expect(cribCheckoutSchema.parse(res.body)).toMatchObject({ id: checkout.id, returnCondition: 'damaged', returnNote: 'The anvil of the small gauge is bent.', returnedAt: expect.any(String) });
-    const attention = await admin.get('/api/crib/attention');
+    const attention = await crib.admin.get('/api/crib/attention');
     expect(attention.body).toContainEqual(expect.objectContaining({ itemId: gauge.id, condition: 'damaged', note: 'The anvil of the small gauge is bent.' }));
-    expect(await ctx.db('crib_items').first('in_circulation').where({ id: gauge.id })).toEqual({ in_circulation: false });
-    const audit = await ctx.db('audit_log').where({ action: 'crib.returned', entity_id: gauge.id }).first('actor_id', 'details');
+    expect(await crib.ctx.db('crib_items').first('in_circulation').where({ id: gauge.id })).toEqual({ in_circulation: false });
+    const audit = await crib.ctx.db('audit_log').where({ action: 'crib.returned', entity_id: gauge.id }).first('actor_id', 'details');
     expect(audit).toMatchObject({ actor_id: null, details: { via: 'station', stationId: station.id, condition: 'damaged' } });
   });
 
   it('puts a tool returned good back on the shelf, ready for the next member', async () => {
-    const { device } = await pairedCrib(ctx);
+    const { device } = await pairedCrib(crib.ctx);
     const { gauge } = await lentAt(device);
     const res = await device.post('/api/station/crib/returns', { tag: gauge.assetTag, condition: 'good' });
     expect(res.status).toBe(200);
@@ -245,7 +229,7 @@ describe('returns at the crib station', () => {
   });
 
   it('answers 409 not_checked_out for a tool that is not out, 404 for an unknown tag and 400 for damage without a note', async () => {
-    const { device } = await pairedCrib(ctx);
+    const { device } = await pairedCrib(crib.ctx);
     const shelved = await tool();
     const notOut = await device.post('/api/station/crib/returns', { tag: shelved.assetTag, condition: 'good' });
     expect(notOut.status).toBe(409);
@@ -263,21 +247,21 @@ describe('returns at the crib station', () => {
 
 describe('the unit price a consumable take keeps', () => {
   it('is the item’s price at the moment of the take, from the web app and the station alike; a tool keeps none', async () => {
-    const { device } = await pairedCrib(ctx);
-    const member = await badgeHolder(ctx, 'member');
-    const wire = await consumable(20, 1250);
-    const web = await admin.post('/api/crib/checkouts', { memberId: member.member.id, itemId: wire.id, quantity: 1 });
+    const { device } = await pairedCrib(crib.ctx);
+    const member = await badgeHolder(crib.ctx, 'member');
+    const wire = await crib.consumable(20, { priceCents: 1250 });
+    const web = await crib.admin.post('/api/crib/checkouts', { memberId: member.member.id, itemId: wire.id, quantity: 1 });
     expect(web.status).toBe(201);
     expect(cribCheckoutSchema.parse(web.body).unitPriceCents).toBe(1250);
 
-    const repriced = await admin.put(`/api/crib/items/${wire.id}`, { kind: 'consumable', name: wire.name, unit: 'each', stock: 19, priceCents: 1400, binLocation: 'C4' });
+    const repriced = await crib.admin.put(`/api/crib/items/${wire.id}`, { kind: 'consumable', name: wire.name, unit: 'each', stock: 19, priceCents: 1400, binLocation: 'C4' });
     expect(repriced.status).toBe(200);
     const station = await device.post('/api/station/crib/checkouts', { badge: member.badge, items: [{ itemId: wire.id, quantity: 2 }] });
     expect(cribStationCheckoutResultSchema.parse(station.body).checkouts[0]?.unitPriceCents).toBe(1400);
 
-    const prices = await ctx.db('crib_checkouts').where({ item_id: wire.id }).orderBy('checked_out_at').pluck('unit_price_cents');
+    const prices = await crib.ctx.db('crib_checkouts').where({ item_id: wire.id }).orderBy('checked_out_at').pluck('unit_price_cents');
     expect(prices).toEqual([1250, 1400]);
     // The database refuses a take without its price, and a tool with one.
-    await expect(ctx.db('crib_checkouts').insert({ item_id: wire.id, item_kind: 'consumable', member_id: member.member.id, quantity: 1, unit_price_cents: null }).then(() => 'stored')).rejects.toThrow(/crib_checkouts_unit_price_for_takes/);
+    await expect(crib.ctx.db('crib_checkouts').insert({ item_id: wire.id, item_kind: 'consumable', member_id: member.member.id, quantity: 1, unit_price_cents: null }).then(() => 'stored')).rejects.toThrow(/crib_checkouts_unit_price_for_takes/);
   });
 });

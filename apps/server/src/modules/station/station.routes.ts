@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import {
   pairSchema,
   reservationCheckInSchema,
@@ -13,7 +12,7 @@ import {
 } from '@chuckkey/core';
 import { z } from 'zod';
 import type { Deps } from '../../lib/deps';
-import { perAddressLimit } from '../../lib/rate-limit';
+import { perAddressLimit, perDeviceLimit, TOO_MANY_SCANS } from '../../lib/rate-limit';
 import { AppError } from '../../lib/errors';
 import { parse, ValidationError, zodFieldErrors } from '../../lib/validate';
 import { currentStation, deviceKey, requireStation, setStationCookie, stationFromRequest } from '../../middleware/station-auth';
@@ -40,22 +39,8 @@ const reservationParams = z.object({ id: z.uuid({ error: 'Not a reservation id.'
 export function stationRoutes(deps: Deps): Router {
   const service = stationService(deps);
   const sessions = machineSessionsService(deps);
-  // Counted per station, not per address: several stations may share one address behind the shop's router.
-  const scanLimit = rateLimit({
-    windowMs: 60_000,
-    limit: deps.config.STATION_SCAN_LIMIT_PER_MINUTE,
-    // No RateLimit headers on every scan: a station never reads them, and making them (the draft-8
-    // form hashes a partition key) was a measurable share of a scan's cost. A refusal says Retry-After.
-    standardHeaders: false,
-    legacyHeaders: false,
-    // Scans are limited before the station is looked up, so by device token (hashed) rather than station id.
-    keyGenerator: deviceKey,
-    handler: (req, res, next) => {
-      const resetTime = (req as typeof req & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-      res.setHeader('Retry-After', String(Math.max(1, Math.ceil(((resetTime?.getTime() ?? Date.now() + 60_000) - Date.now()) / 1000))));
-      next(new AppError(429, 'too_many_requests', 'Too many scans at this station. Wait a minute and try again.'));
-    },
-  });
+  // Counted per device credential, not per address: several stations may share one address behind the shop's router.
+  const scanLimit = perDeviceLimit(deps.config.STATION_SCAN_LIMIT_PER_MINUTE, TOO_MANY_SCANS, deviceKey);
   const router = Router();
 
   // Per process, in memory: about 40 bits of code, 10 minutes of life and 10 wrong tries per

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { sendFile } from '../../../lib/upload-file';
 import { badgeKeys } from './badge-keys';
 
 export interface UploadPhotoInput {
@@ -9,9 +9,7 @@ export interface UploadPhotoInput {
 }
 
 export function uploadPhoto({ memberId, photo, onProgress }: UploadPhotoInput): Promise<void> {
-  const body = new FormData();
-  body.append('photo', photo);
-  return api.upload(`/members/${encodeURIComponent(memberId)}/photo`, { method: 'PUT', body, onProgress });
+  return sendFile(`/members/${encodeURIComponent(memberId)}/photo`, 'photo', photo, { method: 'PUT', onProgress });
 }
 
 export function useUploadPhoto() {

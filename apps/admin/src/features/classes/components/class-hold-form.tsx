@@ -7,6 +7,7 @@ import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { TextLink } from '../../../components/ui/text-link';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
 import { ApiError, errorMessage } from '../../../lib/api-client';
 import { durationLabel, spanLabel } from '../../../lib/shop-clock';
 import type { ClassRequestBody } from '../api/create-class';
@@ -78,8 +79,7 @@ interface Refusal {
  */
 export function ClassHoldForm({ machines, trainings, timeZone, today, onHold, classHref }: ClassHoldFormProps) {
   const [refusal, setRefusal] = useState<Refusal | null>(null);
-  const [held, setHeld] = useState<ClassDetail | null>(null);
-  const heldRef = useRef<HTMLDivElement>(null);
+  const [held, setHeld, heldRef] = useFocusedNotice<ClassDetail | null>(null);
   const refusalRef = useRef<HTMLDivElement>(null);
   const previewId = useId();
   const {
@@ -92,9 +92,6 @@ export function ClassHoldForm({ machines, trainings, timeZone, today, onHold, cl
   } = useForm<ClassHoldFormInput, unknown, ClassHoldValues>({ resolver: zodResolver(classHoldFormSchema), defaultValues: emptyForm });
   const watched = useWatch({ control });
 
-  useEffect(() => {
-    if (held) heldRef.current?.focus();
-  }, [held]);
   useEffect(() => {
     if (refusal) refusalRef.current?.focus();
   }, [refusal]);

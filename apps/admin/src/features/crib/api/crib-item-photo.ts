@@ -1,6 +1,7 @@
 import { cribItemSchema, type CribItem } from '@chuckkey/core';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, apiHref } from '../../../lib/api-client';
+import { sendFile } from '../../../lib/upload-file';
 import { cribItemKeys } from './crib-item-keys';
 
 /** `version` changes after an upload, so the browser fetches the new picture instead of its copy. */
@@ -15,9 +16,7 @@ export interface UploadCribItemPhotoInput {
 }
 
 export function uploadCribItemPhoto({ itemId, photo, onProgress }: UploadCribItemPhotoInput): Promise<CribItem> {
-  const body = new FormData();
-  body.append('photo', photo);
-  return api.upload(`/crib/items/${encodeURIComponent(itemId)}/photo`, { method: 'PUT', body, schema: cribItemSchema, onProgress });
+  return sendFile(`/crib/items/${encodeURIComponent(itemId)}/photo`, 'photo', photo, { method: 'PUT', schema: cribItemSchema, onProgress });
 }
 
 export function removeCribItemPhoto(itemId: string): Promise<void> {

@@ -68,4 +68,13 @@ describe('AssetLabelSheet', () => {
     expect(last.textContent).toContain('Ferrule Street Metalworks');
     expect(decodeSvg(within(last).getByRole('img') as unknown as SVGSVGElement)).toBe('BB-025');
   });
+
+  it('sets the 7 mm page margins only while the sheets are shown', () => {
+    // CSS Paged Media Level 3, the @page rule: it has no selector for one part of an app, so the rule lives and leaves with the sheets.
+    const pageRules = () => [...document.querySelectorAll('style')].filter((style) => /@page\s*\{\s*margin:\s*7mm/.test(style.textContent ?? ''));
+    const { unmount } = render(<AssetLabelSheet tools={tools} shopName={undefined} />);
+    expect(pageRules()).toHaveLength(1);
+    unmount();
+    expect(pageRules()).toHaveLength(0);
+  });
 });

@@ -47,12 +47,20 @@ export function AssetLabel({ tool, shopName }: { tool: LabelledTool; shopName: s
   );
 }
 
+/**
+ * The page margins the label block is laid out for. @page cannot be limited to one page of the app
+ * by a selector, and a bundled style sheet stays once loaded; this element leaves with the sheets,
+ * so every other page prints with the browser's own margins again.
+ */
+const pageMargins = '@page { margin: 7mm; }';
+
 /** Sheets of 24 labels, each sheet a printed page of its own. */
 export function AssetLabelSheet({ tools, shopName }: { tools: readonly LabelledTool[]; shopName: string | undefined }) {
   const sheets: LabelledTool[][] = [];
   for (let start = 0; start < tools.length; start += LABELS_PER_SHEET) sheets.push(tools.slice(start, start + LABELS_PER_SHEET));
   return (
     <div className="-mx-4 overflow-x-auto px-4 print:m-0 print:overflow-visible print:p-0">
+      <style>{pageMargins}</style>
       {sheets.map((sheet, index) => (
         <ul key={index} className="asset-label-page" aria-label={sheets.length > 1 ? `Label sheet ${index + 1} of ${sheets.length}` : 'Label sheet'}>
           {sheet.map((tool) => (

@@ -1,6 +1,6 @@
 import { cribRestoreInputSchema, type CribAttention, type CribRestoreInput } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import type { z } from 'zod';
@@ -8,14 +8,15 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { cn } from '../../../components/ui/cn';
 import { Dialog } from '../../../components/ui/dialog';
+import { DialogForm } from '../../../components/ui/dialog-form';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { DialogActions } from '../../../components/ui/form-actions';
 import { CrossCircleIcon, WarningIcon } from '../../../components/ui/icons';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
-import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
+import { ActionsTh, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { paths } from '../../../config/paths';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 import { formatDateTime } from '../../../lib/format';
 import { useCribAttention } from '../api/attention';
@@ -61,8 +62,7 @@ function RestoreForm({ tool, onClose, onRestored }: { tool: CribAttention; onClo
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-      {formError && <Alert tone="error">{formError}</Alert>}
+    <DialogForm onSubmit={onSubmit} formError={formError} pending={restore.isPending} onCancel={onClose} submitLabel="Back in circulation">
       <TextAreaField
         label="What was done (optional)"
         hint="Kept in the audit log: the repair, the check, who did it."
@@ -70,12 +70,7 @@ function RestoreForm({ tool, onClose, onRestored }: { tool: CribAttention; onClo
         error={errors.note?.message}
         {...register('note')}
       />
-      <DialogActions pending={restore.isPending} onCancel={onClose}>
-        <Button type="submit" pending={restore.isPending}>
-          Back in circulation
-        </Button>
-      </DialogActions>
-    </form>
+    </DialogForm>
   );
 }
 
@@ -83,12 +78,7 @@ function RestoreForm({ tool, onClose, onRestored }: { tool: CribAttention; onClo
 export function CribAttentionList({ timeZone }: { timeZone: string | undefined }) {
   const attention = useCribAttention();
   const [restoring, setRestoring] = useState<CribAttention | null>(null);
-  const [restored, setRestored] = useState<string | null>(null);
-  const restoredRef = useRef<HTMLDivElement>(null);
-
-  useEffect(() => {
-    if (restored) restoredRef.current?.focus();
-  }, [restored]);
+  const [restored, setRestored, restoredRef] = useFocusedNotice<string | null>(null);
 
   return (
     <div className="flex flex-col gap-4">
@@ -112,10 +102,7 @@ export function CribAttentionList({ timeZone }: { timeZone: string | undefined }
               <Th>Return note</Th>
               <Th>Returned by</Th>
               <Th>Returned</Th>
-              {/* Positioned, so the hidden heading stays inside the table's scrolling region on a phone. */}
-              <Th className="relative">
-                <span className="sr-only">Actions</span>
-              </Th>
+              <ActionsTh />
             </Tr>
           </THead>
           <TBody>

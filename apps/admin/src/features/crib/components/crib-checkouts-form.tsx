@@ -1,15 +1,17 @@
 import { cribCheckoutInputSchema, type CribCheckout, type CribCheckoutInput, type CribItem } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useRef, useState, type ComponentType } from 'react';
+import type { ComponentType, Ref } from 'react';
 import { useForm, useWatch, type DefaultValues } from 'react-hook-form';
 import type { z } from 'zod';
+import { ChosenMember } from '../../../components/chosen-member';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { FieldError } from '../../../components/ui/field';
 import { QueryError } from '../../../components/ui/query-error';
 import { SelectField } from '../../../components/ui/select-field';
 import { Spinner } from '../../../components/ui/spinner';
 import { TextField } from '../../../components/ui/text-field';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
+import { useMemberChoice } from '../../../hooks/use-member-choice';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 import { formatDateTime } from '../../../lib/format';
 import { useCheckOut } from '../api/check-out';
@@ -28,6 +30,7 @@ export const checkoutErrorMessages: Record<string, string> = {
   short_stock: 'There is not that much of it in stock. Nothing was taken; choose a smaller count.',
   out_of_circulation: 'This item is out of circulation (waiting for a repair or a check), so it cannot be lent. Put it back in circulation first.',
   member_not_found: 'That member is no longer in the shop’s records. Search again.',
+  member_inactive: 'That member’s account is not active, so nothing can be lent to them.',
   crib_item_not_found: 'That item is no longer in the crib. Choose another.',
   tool_quantity: 'A tool is lent one at a time.',
 };
@@ -35,6 +38,7 @@ export const checkoutErrorMessages: Record<string, string> = {
 const errorOptions = {
   codeFields: {
     member_not_found: 'memberId' as const,
+    member_inactive: 'memberId' as const,
     crib_item_not_found: 'itemId' as const,
     already_out: 'itemId' as const,
     out_of_circulation: 'itemId' as const,
@@ -60,6 +64,8 @@ function doneWords(checkout: CribCheckout, timeZone: string | undefined): string
 export interface CheckoutMemberSearchProps {
   onChoose: (member: CheckoutMember) => void;
   error: string | undefined;
+  /** The search box, focused again when the chosen member is cleared. */
+  inputRef: Ref<HTMLInputElement>;
 }
 
 interface CribCheckoutsFormProps {
@@ -72,11 +78,7 @@ interface CribCheckoutsFormProps {
 export function CribCheckoutsForm({ timeZone, MemberSearch }: CribCheckoutsFormProps) {
   const items = useCheckoutItems();
   const checkOut = useCheckOut();
-  const [member, setMember] = useState<CheckoutMember | null>(null);
-  const [done, setDone] = useState<CribCheckout | null>(null);
-  const chosenRef = useRef<HTMLDivElement>(null);
-  const doneRef = useRef<HTMLDivElement>(null);
-  const focusChosen = useRef(false);
+  const [done, setDone, doneRef] = useFocusedNotice<CribCheckout | null>(null);
 
   const {
     register,
@@ -88,27 +90,15 @@ export function CribCheckoutsForm({ timeZone, MemberSearch }: CribCheckoutsFormP
     formState: { errors, isSubmitted },
   } = useForm<FormInput, unknown, CribCheckoutInput>({ resolver: zodResolver(cribCheckoutInputSchema), defaultValues: emptyForm });
   const { formError, setFormError, showServerError } = useServerErrors(setError, fields, errorOptions);
+  const { member, choose, chosenRef, searchRef } = useMemberChoice<CheckoutMember>((next) =>
+    setValue('memberId', next?.id ?? '', { shouldValidate: isSubmitted }),
+  );
 
   const itemId = useWatch({ control, name: 'itemId' });
   const available = (items.data ?? []).filter((item) => item.available);
   const tools = available.filter((item) => item.kind === 'tool');
   const consumables = available.filter((item) => item.kind === 'consumable');
   const chosenItem = available.find((item) => item.id === itemId);
-
-  useEffect(() => {
-    if (focusChosen.current) chosenRef.current?.focus();
-    focusChosen.current = false;
-  }, [member]);
-
-  useEffect(() => {
-    if (done) doneRef.current?.focus();
-  }, [done]);
-
-  function choose(next: CheckoutMember | null) {
-    focusChosen.current = next !== null;
-    setMember(next);
-    setValue('memberId', next?.id ?? '', { shouldValidate: isSubmitted });
-  }
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -137,21 +127,16 @@ export function CribCheckoutsForm({ timeZone, MemberSearch }: CribCheckoutsFormP
         <section className="flex flex-col gap-3">
           <h3 className="text-lg font-bold text-neutral-900">1. Member</h3>
           {member ? (
-            <div className="flex flex-col gap-2">
-              <div ref={chosenRef} tabIndex={-1} className="flex flex-col gap-1 rounded-lg border-2 border-brand bg-brand-soft p-3">
-                <p className="text-sm text-neutral-700">Checking out to</p>
-                <p className="text-lg font-bold break-words text-neutral-900">{member.name}</p>
-                <p className="break-all text-neutral-800">{member.email}</p>
-              </div>
-              {errors.memberId?.message && <FieldError id="crib-checkout-member-error">{errors.memberId.message}</FieldError>}
-              <div>
-                <Button variant="secondary" onClick={() => choose(null)}>
-                  Change member
-                </Button>
-              </div>
-            </div>
+            <ChosenMember
+              member={member}
+              caption="Checking out to"
+              cardRef={chosenRef}
+              error={errors.memberId?.message}
+              errorId="crib-checkout-member-error"
+              onChange={() => choose(null)}
+            />
           ) : (
-            <MemberSearch onChoose={choose} error={errors.memberId?.message} />
+            <MemberSearch onChoose={choose} error={errors.memberId?.message} inputRef={searchRef} />
           )}
         </section>
 

@@ -3,10 +3,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { ChoiceGroup, RadioOption } from '../../../components/ui/choice-group';
 import { Dialog } from '../../../components/ui/dialog';
-import { DialogActions } from '../../../components/ui/form-actions';
+import { DialogForm } from '../../../components/ui/dialog-form';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useReturnCheckout } from '../api/return-checkout';
@@ -54,8 +53,7 @@ function ReturnForm({ checkout, onClose, onReturned }: { checkout: CribCheckout;
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-      {formError && <Alert tone="error">{formError}</Alert>}
+    <DialogForm onSubmit={onSubmit} formError={formError} pending={ret.isPending} onCancel={onClose} submitLabel="Record return">
       <ChoiceGroup legend="Condition" error={errors.condition?.message}>
         {cribConditions.map((value) => (
           <RadioOption key={value} value={value} label={conditionLabels[value]} description={conditionMeanings[value]} {...register('condition')} />
@@ -71,12 +69,7 @@ function ReturnForm({ checkout, onClose, onReturned }: { checkout: CribCheckout;
         error={errors.note?.message}
         {...register('note')}
       />
-      <DialogActions pending={ret.isPending} onCancel={onClose}>
-        <Button type="submit" pending={ret.isPending}>
-          Record return
-        </Button>
-      </DialogActions>
-    </form>
+    </DialogForm>
   );
 }
 

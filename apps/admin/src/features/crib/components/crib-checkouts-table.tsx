@@ -5,22 +5,17 @@ import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { FilterBar } from '../../../components/ui/filter-bar';
 import { PagedResults } from '../../../components/ui/paged-results';
-import { SortableTh, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
+import { ActionsTh, SortableThs, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { TextField } from '../../../components/ui/text-field';
 import { formatDateTime } from '../../../lib/format';
+import { nextSort, type SortColumn } from '../../../lib/table-sort';
 import { cribCheckoutsQueryOptions } from '../api/checkouts';
 import { useCribClock } from '../hooks/use-crib-clock';
-import {
-  CHECKOUT_PAGE_SIZE,
-  checkoutPage,
-  nextCheckoutSort,
-  type CheckoutSort,
-  type CheckoutSortField,
-} from '../utils/crib-checkouts-rows';
+import { CHECKOUT_PAGE_SIZE, checkoutPage, type CheckoutSort, type CheckoutSortField } from '../utils/crib-checkouts-rows';
 import { CribCheckoutsDueBadge } from './crib-checkouts-due-badge';
 import { conditionLabels } from './crib-checkouts-return-dialog';
 
-const columns: { field: CheckoutSortField; label: string }[] = [
+const columns: SortColumn<CheckoutSortField>[] = [
   { field: 'member', label: 'Member' },
   { field: 'item', label: 'Item' },
   { field: 'checkedOut', label: 'Checked out' },
@@ -89,24 +84,17 @@ export function CribCheckoutsTable({ open, timeZone, onReturn }: CribCheckoutsTa
           <Table caption={caption}>
             <THead>
               <Tr>
-                {columns.map((column) => (
-                  <SortableTh
-                    key={column.field}
-                    label={column.label}
-                    order={sort.field === column.field ? sort.order : undefined}
-                    onSort={() => {
-                      setSort((current) => nextCheckoutSort(current, column.field));
-                      setPage(1);
-                    }}
-                  />
-                ))}
+                <SortableThs
+                  columns={columns}
+                  sortedField={sort.field}
+                  order={sort.order}
+                  onSort={(field) => {
+                    setSort((current) => nextSort(current, field));
+                    setPage(1);
+                  }}
+                />
                 <Th>{open ? 'Overdue' : 'State'}</Th>
-                {/* Positioned, so the hidden heading stays inside the table's scrolling region on a phone. */}
-                {open && onReturn && (
-                  <Th className="relative">
-                    <span className="sr-only">Actions</span>
-                  </Th>
-                )}
+                {open && onReturn && <ActionsTh />}
               </Tr>
             </THead>
             <TBody>

@@ -1,10 +1,11 @@
 import type { CribCheckout } from '@chuckkey/core';
-import { useEffect, useRef, useState, type ComponentType } from 'react';
+import { useState, type ComponentType } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
 import { CribCheckoutsForm, type CheckoutMemberSearchProps } from './crib-checkouts-form';
 import { CribCheckoutsReturnDialog, conditionLabels } from './crib-checkouts-return-dialog';
 import { CribCheckoutsTable } from './crib-checkouts-table';
@@ -17,13 +18,8 @@ interface CribCheckoutsViewProps {
 /** Lending at the counter, the tools out now with their returns, and the recent history. */
 export function CribCheckoutsView({ timeZone, MemberSearch }: CribCheckoutsViewProps) {
   const [returning, setReturning] = useState<CribCheckout | null>(null);
-  const [returned, setReturned] = useState<CribCheckout | null>(null);
+  const [returned, setReturned, returnedRef] = useFocusedNotice<CribCheckout | null>(null);
   const [history, setHistory] = useState(false);
-  const returnedRef = useRef<HTMLDivElement>(null);
-
-  useEffect(() => {
-    if (returned) returnedRef.current?.focus();
-  }, [returned]);
 
   const outOfCirculation = returned?.returnCondition && returned.returnCondition !== 'good';
 

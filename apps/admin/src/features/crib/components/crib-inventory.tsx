@@ -10,7 +10,7 @@ import { ChoiceFilter, FilterBar } from '../../../components/ui/filter-bar';
 import { DownloadIcon, PlusIcon, PrinterIcon } from '../../../components/ui/icons';
 import { PagedResults } from '../../../components/ui/paged-results';
 import { SelectField } from '../../../components/ui/select-field';
-import { SortableTh, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
+import { ActionsTh, SortableThs, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { TextField } from '../../../components/ui/text-field';
 import { paths } from '../../../config/paths';
 import { WIDE_SCREEN, useMediaQuery } from '../../../hooks/use-media-query';
@@ -108,12 +108,8 @@ function InventoryTable({ items, filters, chosen, onChoose, onSort, onEdit }: Li
               </label>
             )}
           </Th>
-          {inventoryColumns.map((column) => (
-            <SortableTh key={column.sort} label={column.label} order={filters.sort === column.sort ? filters.order : undefined} onSort={() => onSort(column.sort)} />
-          ))}
-          <Th>
-            <span className="sr-only">Actions</span>
-          </Th>
+          <SortableThs columns={inventoryColumns} sortedField={filters.sort} order={filters.order} onSort={onSort} />
+          <ActionsTh />
         </Tr>
       </THead>
       <TBody>
@@ -175,7 +171,7 @@ function InventoryCards({ items, chosen, onChoose, onEdit }: Omit<ListProps, 'fi
 }
 
 const sortChoices = inventorySorts.flatMap((sort) => {
-  const label = inventoryColumns.find((column) => column.sort === sort)?.label ?? sort;
+  const label = inventoryColumns.find((column) => column.field === sort)?.label ?? sort;
   return [
     { value: `${sort}:asc`, label: `${label}, ascending` },
     { value: `${sort}:desc`, label: `${label}, descending` },

@@ -6,8 +6,9 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
 import { ChoiceGroup, RadioOption } from '../../../components/ui/choice-group';
+import { DialogActions } from '../../../components/ui/form-actions';
 import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
+import { CountField, TextField } from '../../../components/ui/text-field';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useSaveCribItem } from '../api/save-crib-item';
 import { conditionLabels } from '../utils/inventory';
@@ -80,10 +81,8 @@ export function CribItemForm({ item, onSaved, onCancel }: CribItemFormProps) {
               ))}
             </SelectField>
           </div>
-          <TextField
+          <CountField
             label="Loan period in hours (optional)"
-            inputMode="numeric"
-            autoComplete="off"
             hint="Leave it blank and the tool is due back at the shop's closing time on the day it goes out."
             error={errors.loanPeriodHours?.message}
             {...register('loanPeriodHours')}
@@ -96,11 +95,9 @@ export function CribItemForm({ item, onSaved, onCancel }: CribItemFormProps) {
             <TextField label="Unit" autoComplete="off" hint="What one of it is: each, spool, box." error={errors.unit?.message} {...register('unit')} />
           </div>
           <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">
-            <TextField label="In stock" inputMode="numeric" autoComplete="off" hint="Units on the shelf now." error={errors.stock?.message} {...register('stock')} />
-            <TextField
+            <CountField label="In stock" hint="Units on the shelf now." error={errors.stock?.message} {...register('stock')} />
+            <CountField
               label="Reorder level (optional)"
-              inputMode="numeric"
-              autoComplete="off"
               hint="Order more when the stock gets down to this."
               error={errors.reorderLevel?.message}
               {...register('reorderLevel')}
@@ -116,14 +113,11 @@ export function CribItemForm({ item, onSaved, onCancel }: CribItemFormProps) {
         error={errors.inCirculation?.message}
         {...register('inCirculation')}
       />
-      <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-        <Button variant="secondary" onClick={onCancel} disabled={save.isPending}>
-          Cancel
-        </Button>
+      <DialogActions pending={save.isPending} onCancel={onCancel}>
         <Button type="submit" pending={save.isPending}>
           {item ? 'Save changes' : 'Add item'}
         </Button>
-      </div>
+      </DialogActions>
     </form>
   );
 }

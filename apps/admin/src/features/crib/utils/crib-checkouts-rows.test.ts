@@ -1,6 +1,6 @@
 import type { CribCheckout } from '@chuckkey/core';
 import { describe, expect, it } from 'vitest';
-import { CHECKOUT_PAGE_SIZE, checkoutPage, dueOf, lengthWords, nextCheckoutSort, searchCheckouts } from './crib-checkouts-rows';
+import { CHECKOUT_PAGE_SIZE, checkoutPage, dueOf, lengthWords, searchCheckouts } from './crib-checkouts-rows';
 
 let next = 0;
 function checkout(memberName: string, itemName: string, dueAt: string | null, checkedOutAt = '2026-11-30T09:00:00.000Z'): CribCheckout {
@@ -85,12 +85,5 @@ describe('checkoutPage', () => {
     expect(second.total).toBe(CHECKOUT_PAGE_SIZE + 3);
     // ECMA-402 Intl.Collator, option numeric: digits compare as numbers, so "Member 26" follows "Member 9".
     expect(second.items.map((row) => row.memberName)).toEqual(['Member 26', 'Member 27', 'Member 28']);
-  });
-});
-
-describe('nextCheckoutSort', () => {
-  it('turns the sorted column round and starts a new column ascending', () => {
-    expect(nextCheckoutSort({ field: 'due', order: 'asc' }, 'due')).toEqual({ field: 'due', order: 'desc' });
-    expect(nextCheckoutSort({ field: 'due', order: 'desc' }, 'member')).toEqual({ field: 'member', order: 'asc' });
   });
 });

@@ -1,4 +1,5 @@
 import type { CribCheckout } from '@chuckkey/core';
+import { instantOrLast, nameCollator, sortRows, type ColumnComparers, type ColumnSort } from '../../../lib/table-sort';
 
 const MINUTE_MS = 60_000;
 const HOUR_MIN = 60;
@@ -35,12 +36,7 @@ export function dueOf(dueAt: string | null, now: Date): Due {
 
 export const checkoutSortFields = ['member', 'item', 'checkedOut', 'due'] as const;
 export type CheckoutSortField = (typeof checkoutSortFields)[number];
-export type SortOrder = 'asc' | 'desc';
-
-export interface CheckoutSort {
-  field: CheckoutSortField;
-  order: SortOrder;
-}
+export type CheckoutSort = ColumnSort<CheckoutSortField>;
 
 export interface CheckoutView {
   search: string;
@@ -50,30 +46,20 @@ export interface CheckoutView {
 
 export const CHECKOUT_PAGE_SIZE = 25;
 
-const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
-
 /** Lower case without accents, so "zoe" finds "Zoë". */
 function fold(text: string): string {
   return text.normalize('NFD').replace(/\p{Diacritic}/gu, '').toLowerCase();
 }
 
 // A take without a due time sorts after every dated checkout: nothing is waited for.
-function dueKey(checkout: CribCheckout): number {
-  return checkout.dueAt ? Date.parse(checkout.dueAt) : Number.POSITIVE_INFINITY;
-}
+const byDue = (a: CribCheckout, b: CribCheckout) => instantOrLast(a.dueAt) - instantOrLast(b.dueAt);
 
-function compare(a: CribCheckout, b: CribCheckout, field: CheckoutSortField): number {
-  switch (field) {
-    case 'member':
-      return collator.compare(a.memberName, b.memberName);
-    case 'item':
-      return collator.compare(a.itemName, b.itemName);
-    case 'checkedOut':
-      return Date.parse(a.checkedOutAt) - Date.parse(b.checkedOutAt);
-    case 'due':
-      return dueKey(a) - dueKey(b);
-  }
-}
+const comparers: ColumnComparers<CribCheckout, CheckoutSortField> = {
+  member: (a, b) => nameCollator.compare(a.memberName, b.memberName),
+  item: (a, b) => nameCollator.compare(a.itemName, b.itemName),
+  checkedOut: (a, b) => Date.parse(a.checkedOutAt) - Date.parse(b.checkedOutAt),
+  due: byDue,
+};
 
 /** Checkouts whose member or item holds every word of the search, in any order. */
 export function searchCheckouts(checkouts: readonly CribCheckout[], search: string): CribCheckout[] {
@@ -87,14 +73,7 @@ export function searchCheckouts(checkouts: readonly CribCheckout[], search: stri
 
 /** The crib's lists are one shop's worth, so they are searched, sorted and paged in the browser; ties keep the soonest due first. */
 export function checkoutPage(checkouts: readonly CribCheckout[], view: CheckoutView): { items: CribCheckout[]; total: number } {
-  const direction = view.sort.order === 'asc' ? 1 : -1;
-  const sorted = searchCheckouts(checkouts, view.search).sort((a, b) => direction * compare(a, b, view.sort.field) || dueKey(a) - dueKey(b));
+  const sorted = sortRows(searchCheckouts(checkouts, view.search), view.sort, comparers, byDue);
   const start = (view.page - 1) * CHECKOUT_PAGE_SIZE;
   return { items: sorted.slice(start, start + CHECKOUT_PAGE_SIZE), total: sorted.length };
-}
-
-/** Clicking the sorted column turns it round; a new column starts A to Z, or soonest first. */
-export function nextCheckoutSort(current: CheckoutSort, field: CheckoutSortField): CheckoutSort {
-  if (current.field === field) return { field, order: current.order === 'asc' ? 'desc' : 'asc' };
-  return { field, order: 'asc' };
 }

@@ -1,5 +1,6 @@
 import { cribConditions, cribItemKinds, type CribCondition, type CribItem } from '@chuckkey/core';
 import { z } from 'zod';
+import { nextOrder, type SortColumn } from '../../../lib/table-sort';
 
 export const INVENTORY_PAGE_SIZE = 25;
 
@@ -12,14 +13,14 @@ export const kindLabels: Record<CribItem['kind'], string> = { tool: 'Tool', cons
 export const conditionLabels: Record<CribCondition, string> = { good: 'Good', needs_attention: 'Needs attention', damaged: 'Damaged' };
 export const availabilityLabels: Record<Availability, string> = { available: 'Available', unavailable: 'Not available' };
 
-export const inventoryColumns: { sort: InventorySort; label: string }[] = [
-  { sort: 'name', label: 'Name' },
-  { sort: 'kind', label: 'Kind' },
-  { sort: 'assetTag', label: 'Asset tag' },
-  { sort: 'binLocation', label: 'Bin' },
-  { sort: 'level', label: 'Condition / stock' },
-  { sort: 'inCirculation', label: 'In circulation' },
-  { sort: 'available', label: 'Available' },
+export const inventoryColumns: SortColumn<InventorySort>[] = [
+  { field: 'name', label: 'Name' },
+  { field: 'kind', label: 'Kind' },
+  { field: 'assetTag', label: 'Asset tag' },
+  { field: 'binLocation', label: 'Bin' },
+  { field: 'level', label: 'Condition / stock' },
+  { field: 'inCirculation', label: 'In circulation' },
+  { field: 'available', label: 'Available' },
 ];
 
 const filtersSchema = z.object({
@@ -57,8 +58,7 @@ export function inventoryFiltersToSearchParams(filters: InventoryFilters): URLSe
 
 /** Clicking the sorted column turns its order round; another column starts ascending. */
 export function nextSort(filters: InventoryFilters, sort: InventorySort): Pick<InventoryFilters, 'sort' | 'order'> {
-  if (filters.sort === sort) return { sort, order: filters.order === 'asc' ? 'desc' : 'asc' };
-  return { sort, order: 'asc' };
+  return { sort, order: nextOrder(filters.sort, filters.order, sort) };
 }
 
 /**

@@ -1,5 +1,5 @@
 import { roleLabels, type Member, type MemberListQuery } from '@chuckkey/core';
-import { SortableTh, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
+import { ActionsTh, SortableThs, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { formatDate } from '../../../lib/format';
 import { memberColumns, type MemberSort } from '../utils/member-filters';
 import { ActiveToggle, RoleSelect, StatusBadge } from './member-actions';
@@ -40,18 +40,9 @@ export function MembersTable({ members, filters, currentUserId, timeZone, onSort
               </label>
             </Th>
           )}
-          {memberColumns.map((column) => (
-            <SortableTh
-              key={column.sort}
-              label={column.label}
-              order={filters.sort === column.sort ? filters.order : undefined}
-              onSort={() => onSort(column.sort)}
-            />
-          ))}
+          <SortableThs columns={memberColumns} sortedField={filters.sort} order={filters.order} onSort={onSort} />
           <Th>Status</Th>
-          <Th>
-            <span className="sr-only">Actions</span>
-          </Th>
+          <ActionsTh />
         </Tr>
       </THead>
       <TBody>

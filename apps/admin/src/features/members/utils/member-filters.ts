@@ -1,15 +1,16 @@
 import { memberListQuerySchema, type MemberListQuery } from '@chuckkey/core';
 import { apiHref } from '../../../lib/api-client';
+import type { SortColumn } from '../../../lib/table-sort';
 
 export type MemberSort = MemberListQuery['sort'];
 
 const MEMBERS_PAGE_SIZE = 25;
 
-export const memberColumns: { sort: MemberSort; label: string }[] = [
-  { sort: 'name', label: 'Name' },
-  { sort: 'email', label: 'E-mail' },
-  { sort: 'role', label: 'Role' },
-  { sort: 'createdAt', label: 'Joined' },
+export const memberColumns: SortColumn<MemberSort>[] = [
+  { field: 'name', label: 'Name' },
+  { field: 'email', label: 'E-mail' },
+  { field: 'role', label: 'Role' },
+  { field: 'createdAt', label: 'Joined' },
 ];
 
 type SortChoice = Pick<MemberListQuery, 'sort' | 'order'>;

@@ -1,11 +1,11 @@
 import { closureInputSchema, type ClosureInput, type ShopClosure } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 
 type FormInput = z.input<typeof closureInputSchema>;
@@ -21,8 +21,7 @@ interface ClosureFormProps {
 }
 
 export function ClosureForm({ today, onAdd }: ClosureFormProps) {
-  const [added, setAdded] = useState<ShopClosure | null>(null);
-  const addedRef = useRef<HTMLDivElement>(null);
+  const [added, setAdded, addedRef] = useFocusedNotice<ShopClosure | null>(null);
   const {
     register,
     handleSubmit,
@@ -34,10 +33,6 @@ export function ClosureForm({ today, onAdd }: ClosureFormProps) {
     defaultValues: { startsOn: '', endsOn: '', reason: '' },
   });
   const { formError, setFormError, showServerError } = useServerErrors(setError, fields);
-
-  useEffect(() => {
-    if (added) addedRef.current?.focus();
-  }, [added]);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);

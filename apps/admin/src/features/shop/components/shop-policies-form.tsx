@@ -1,9 +1,10 @@
 import { OVERDUE_CHECKOUT_BLOCK_DAYS_MAX, shopPoliciesSchema, type ShopPolicies } from '@chuckkey/core';
-import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
-import { TextField } from '../../../components/ui/text-field';
+import { CountField } from '../../../components/ui/text-field';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
 import { splitServerErrors } from '../../../lib/form-errors';
 
 /** On a phone in the shop, every control here is at least 48 px tall. */
@@ -24,14 +25,9 @@ export function ShopPoliciesForm({ policies, onSave }: ShopPoliciesFormProps) {
   const [days, setDays] = useState(policies.overdueCheckoutBlockDays === null ? '' : String(policies.overdueCheckoutBlockDays));
   const [daysError, setDaysError] = useState<string | undefined>();
   const [formError, setFormError] = useState<string | null>(null);
-  const [saved, setSaved] = useState(false);
+  const [saved, setSaved, savedRef] = useFocusedNotice(false);
   const [pending, setPending] = useState(false);
   const daysRef = useRef<HTMLInputElement>(null);
-  const savedRef = useRef<HTMLDivElement>(null);
-
-  useEffect(() => {
-    if (saved) savedRef.current?.focus();
-  }, [saved]);
 
   const showDaysError = (message: string) => {
     setDaysError(message);
@@ -93,12 +89,10 @@ export function ShopPoliciesForm({ policies, onSave }: ShopPoliciesFormProps) {
           className={TOUCH}
         />
         {blocking && (
-          <TextField
+          <CountField
             ref={daysRef}
             label="Days overdue before machines refuse"
             hint={`0 blocks from the moment the tool is due; at most ${OVERDUE_CHECKOUT_BLOCK_DAYS_MAX}.`}
-            inputMode="numeric"
-            autoComplete="off"
             value={days}
             onChange={(event) => {
               setDays(event.target.value);

@@ -1,12 +1,13 @@
 import { weekdayNames, weekdays, weeklyHoursInputSchema, type ShopHours, type Weekday, type WeeklyHoursInput } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useId, useRef, useState, type ComponentProps } from 'react';
+import { useEffect, useId, useRef, type ComponentProps } from 'react';
 import { useFieldArray, useForm, type FieldErrors } from 'react-hook-form';
 import type { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { controlClasses, describedBy, FieldError, useFieldIds } from '../../../components/ui/field';
 import { PlusIcon, TrashIcon } from '../../../components/ui/icons';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 
 type FormInput = z.input<typeof weeklyHoursInputSchema>;
@@ -59,8 +60,7 @@ const intervalError = (errors: FieldErrors<FormInput>, index: number, field: key
  */
 export function WeeklyHoursForm({ weekly, onSave }: WeeklyHoursFormProps) {
   const baseId = useId();
-  const [saved, setSaved] = useState(false);
-  const savedRef = useRef<HTMLDivElement>(null);
+  const [saved, setSaved, savedRef] = useFocusedNotice(false);
   const pendingFocus = useRef<string | null>(null);
   const {
     register,
@@ -84,10 +84,6 @@ export function WeeklyHoursForm({ weekly, onSave }: WeeklyHoursFormProps) {
     document.getElementById(pendingFocus.current)?.focus();
     pendingFocus.current = null;
   });
-
-  useEffect(() => {
-    if (saved) savedRef.current?.focus();
-  }, [saved]);
 
   const noHoursAtAll = fields.length === 0;
 

@@ -1,10 +1,8 @@
 import { signOffRevokeSchema, type SignOff } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
-import { DialogActions } from '../../../components/ui/form-actions';
+import { DialogForm } from '../../../components/ui/dialog-form';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 import { useRevokeSignOff } from '../api/revoke-sign-off';
@@ -35,8 +33,7 @@ function RevokeForm({ signOff, onClose, onRevoked }: { signOff: SignOff; onClose
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-      {formError && <Alert tone="error">{formError}</Alert>}
+    <DialogForm onSubmit={onSubmit} formError={formError} pending={revoke.isPending} onCancel={onClose} submitLabel="Revoke sign-off" submitVariant="danger">
       <TextAreaField
         label="Reason"
         hint="The member sees it on their record. Say what was seen and what they need to do to be signed off again."
@@ -44,12 +41,7 @@ function RevokeForm({ signOff, onClose, onRevoked }: { signOff: SignOff; onClose
         error={errors.reason?.message}
         {...register('reason')}
       />
-      <DialogActions pending={revoke.isPending} onCancel={onClose}>
-        <Button type="submit" variant="danger" pending={revoke.isPending}>
-          Revoke sign-off
-        </Button>
-      </DialogActions>
-    </form>
+    </DialogForm>
   );
 }
 

@@ -7,23 +7,25 @@ import {
   type Training,
 } from '@chuckkey/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { Controller, useForm, useWatch, type DefaultValues } from 'react-hook-form';
+import { ChosenMember } from '../../../components/chosen-member';
 import { MemberPhoto } from '../../../components/member-photo';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
 import { ChoiceGroup, RadioOption } from '../../../components/ui/choice-group';
-import { FieldError } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextLink } from '../../../components/ui/text-link';
 import { paths } from '../../../config/paths';
+import { useFocusedNotice } from '../../../hooks/use-focused-notice';
+import { useMemberChoice } from '../../../hooks/use-member-choice';
 import { useServerErrors } from '../../../hooks/use-server-errors';
 import { ApiError } from '../../../lib/api-client';
 import { useCreateSignOff } from '../api/create-sign-off';
 import { previewValidUntil, validUntilDate } from '../utils/sign-off-dates';
-import { CandidateSearch } from './candidate-search';
+import { CandidateChoice } from './candidate-choice';
 
 const fields = ['memberId', 'trainingId', 'level', 'checklist', 'note'] as const;
 
@@ -59,13 +61,8 @@ interface SignOffFormProps {
 
 export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormProps) {
   const create = useCreateSignOff();
-  const [member, setMember] = useState<TeachMember | null>(null);
-  const [done, setDone] = useState<SignOff | null>(null);
+  const [done, setDone, doneRef] = useFocusedNotice<SignOff | null>(null);
   const [now, setNow] = useState(() => new Date());
-  const chosenRef = useRef<HTMLDivElement>(null);
-  const searchRef = useRef<HTMLInputElement>(null);
-  const doneRef = useRef<HTMLDivElement>(null);
-  const focusAfterChoice = useRef<'chosen' | 'search' | null>(null);
 
   const {
     register,
@@ -77,6 +74,9 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
     formState: { errors, isSubmitted },
   } = useForm<SignOffCreateInput, unknown, SignOffCreate>({ resolver: zodResolver(signOffCreateSchema), defaultValues: emptyForm });
   const { formError, setFormError, showServerError } = useServerErrors(setError, fields, errorOptions);
+  const { member, choose, forget, chosenRef, searchRef } = useMemberChoice<TeachMember>((next) =>
+    setValue('memberId', next?.id ?? '', { shouldValidate: isSubmitted }),
+  );
 
   const trainingId = useWatch({ control, name: 'trainingId' });
   const level = useWatch({ control, name: 'level' });
@@ -86,29 +86,13 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
   const allTicked = items.every((item) => ticked.includes(item.id));
   const preview = training ? previewValidUntil(now, training.validityMonths, timeZone) : null;
 
-  useEffect(() => {
-    if (focusAfterChoice.current === 'chosen') chosenRef.current?.focus();
-    if (focusAfterChoice.current === 'search') searchRef.current?.focus();
-    focusAfterChoice.current = null;
-  }, [member]);
-
-  useEffect(() => {
-    if (done) doneRef.current?.focus();
-  }, [done]);
-
-  function choose(next: TeachMember | null) {
-    focusAfterChoice.current = next ? 'chosen' : 'search';
-    setMember(next);
-    setValue('memberId', next?.id ?? '', { shouldValidate: isSubmitted });
-  }
-
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     setDone(null);
     try {
       const signOff = await create.mutateAsync(values);
       reset(emptyForm);
-      setMember(null);
+      forget();
       setNow(new Date());
       setDone(signOff);
     } catch (error) {
@@ -147,54 +131,25 @@ export function SignOffForm({ trainings, timeZone, currentUserId }: SignOffFormP
             1. Member
           </h3>
           {member ? (
-            <div className="flex flex-col gap-2">
-              <div
-                ref={chosenRef}
-                tabIndex={-1}
-                className="flex items-start gap-3 rounded-lg border-2 border-brand bg-brand-soft p-3"
-              >
-                <MemberPhoto memberId={member.id} name={member.name} />
-                <div className="flex min-w-0 flex-1 flex-col gap-1">
-                  <p className="text-sm text-neutral-700">Signing off</p>
-                  <p className="text-lg font-bold break-words text-neutral-900">{member.name}</p>
-                  <p className="break-all text-neutral-800">{member.email}</p>
-                  <p className="text-sm text-neutral-700">Check that the photo is the person in front of you.</p>
-                </div>
-              </div>
-              {errors.memberId?.message && <FieldError id="sign-off-member-error">{errors.memberId.message}</FieldError>}
-              <div>
-                <Button variant="secondary" onClick={() => choose(null)}>
-                  Change member
-                </Button>
-              </div>
-            </div>
+            <ChosenMember
+              member={member}
+              caption="Signing off"
+              cardRef={chosenRef}
+              error={errors.memberId?.message}
+              errorId="sign-off-member-error"
+              onChange={() => choose(null)}
+              picture={<MemberPhoto memberId={member.id} name={member.name} />}
+              note="Check that the photo is the person in front of you."
+            />
           ) : (
-            <CandidateSearch
+            <CandidateChoice
               label="Find the member"
               inputRef={searchRef}
               error={errors.memberId?.message}
-              renderResult={(candidate) => {
-                const why = candidate.id === currentUserId ? 'You can’t sign yourself off.' : !candidate.active ? 'Inactive: an admin has to reactivate them first.' : null;
-                if (why) {
-                  return (
-                    <div className="flex flex-col px-4 py-3">
-                      <span className="font-bold text-neutral-900">{candidate.name}</span>
-                      <span className="break-all text-neutral-800">{candidate.email}</span>
-                      <span className="text-sm text-neutral-700">{why}</span>
-                    </div>
-                  );
-                }
-                return (
-                  <button
-                    type="button"
-                    onClick={() => choose(candidate)}
-                    className="flex min-h-11 w-full flex-col items-start px-4 py-3 text-left hover:bg-brand-soft"
-                  >
-                    <span className="font-bold text-brand underline underline-offset-4">Choose {candidate.name}</span>
-                    <span className="break-all text-neutral-800">{candidate.email}</span>
-                  </button>
-                );
-              }}
+              onChoose={choose}
+              whyNot={(candidate) =>
+                candidate.id === currentUserId ? 'You can’t sign yourself off.' : !candidate.active ? 'Inactive: an admin has to reactivate them first.' : null
+              }
             />
           )}
         </section>

@@ -7,15 +7,16 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { DownloadIcon } from '../../../components/ui/icons';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
-import { SortableTh, TBody, THead, Table, Td, Tr } from '../../../components/ui/table';
+import { SortableThs, TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table';
 import { paths } from '../../../config/paths';
+import { nextSort, type SortColumn } from '../../../lib/table-sort';
 import { signOffReportCsvHref, useSignOffReport } from '../api/get-sign-off-report';
 import type { SignOffReportStatus } from '../api/sign-off-keys';
 import { validUntilDate } from '../utils/sign-off-dates';
-import { nextSignOffSort, sortSignOffs, type SignOffSort, type SignOffSortField } from '../utils/sign-off-sort';
+import { sortSignOffs, type SignOffSort, type SignOffSortField } from '../utils/sign-off-sort';
 import { SignOffStateBadge } from './sign-off-state-badge';
 
-const columns: { field: SignOffSortField; label: string }[] = [
+const columns: SortColumn<SignOffSortField>[] = [
   { field: 'member', label: 'Member' },
   { field: 'training', label: 'Training' },
   { field: 'level', label: 'Level' },
@@ -70,17 +71,13 @@ export function SignOffReport({ status, timeZone }: { status: SignOffReportStatu
         <Table caption={caption}>
           <THead>
             <Tr>
-              {columns.map((column) => (
-                <SortableTh
-                  key={column.field}
-                  label={column.label}
-                  order={sort.field === column.field ? sort.order : undefined}
-                  onSort={() => setSort((current) => nextSignOffSort(current, column.field))}
-                />
-              ))}
-              <th scope="col" className="px-4 py-3 text-sm font-bold text-neutral-800">
-                State
-              </th>
+              <SortableThs
+                columns={columns}
+                sortedField={sort.field}
+                order={sort.order}
+                onSort={(field) => setSort((current) => nextSort(current, field))}
+              />
+              <Th>State</Th>
             </Tr>
           </THead>
           <TBody>

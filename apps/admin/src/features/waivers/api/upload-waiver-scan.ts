@@ -1,6 +1,7 @@
 import { waiverStatusSchema, type WaiverStatus } from '@chuckkey/core';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api, apiHref } from '../../../lib/api-client';
+import { apiHref } from '../../../lib/api-client';
+import { sendFile } from '../../../lib/upload-file';
 import { waiverKeys } from './waiver-keys';
 
 export interface UploadWaiverScanInput {
@@ -10,9 +11,7 @@ export interface UploadWaiverScanInput {
 }
 
 export function uploadWaiverScan({ memberId, scan, onProgress }: UploadWaiverScanInput): Promise<WaiverStatus> {
-  const body = new FormData();
-  body.append('scan', scan);
-  return api.upload(`/members/${encodeURIComponent(memberId)}/waiver-scan`, { body, schema: waiverStatusSchema, onProgress });
+  return sendFile(`/members/${encodeURIComponent(memberId)}/waiver-scan`, 'scan', scan, { schema: waiverStatusSchema, onProgress });
 }
 
 export function waiverScanHref(memberId: string): string {

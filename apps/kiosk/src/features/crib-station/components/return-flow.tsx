@@ -1,6 +1,7 @@
 import { CRIB_DAMAGE_NOTE_HINT, type CribCondition, type CribStationItem } from '@chuckkey/core';
 import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
+import { FormActions } from '@/components/ui/form-actions';
 import { Icon, type IconName } from '@/components/ui/icon';
 import { useFocusOnMount } from '@/hooks/use-focus-on-mount';
 import { useLookupCribTag } from '../api/lookup-crib-tag';
@@ -179,14 +180,7 @@ function ConditionStep({
           {cribMessage(returning.error)}
         </p>
       ) : null}
-      <div className="flex flex-wrap gap-4">
-        <Button type="submit" disabled={!condition || noteNeeded || returning.isPending}>
-          {returning.isPending ? 'Returning…' : 'Return'}
-        </Button>
-        <Button variant="quiet" onClick={onCancel}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions submit={returning.isPending ? 'Returning…' : 'Return'} cancel="Cancel" onCancel={onCancel} disabled={!condition || noteNeeded || returning.isPending} />
     </form>
   );
 }

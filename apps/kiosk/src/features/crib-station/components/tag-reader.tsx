@@ -1,10 +1,11 @@
+import { cribTagSchema } from '@chuckkey/core';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
+import { TypedCodeForm } from '@/components/ui/typed-code-form';
 import { useScannerWedge } from '@/hooks/use-scanner-wedge';
 import { tagScan } from '../utils/tag-scan';
 import type { CribScanners } from './scanners';
-import { TypedTagForm } from './typed-tag-form';
 
 /**
  * Three ways to give a tool's tag, as for a badge: the camera, a hand scanner typing it, or the
@@ -20,7 +21,19 @@ export function TagReader({ prompt, onTag, busy, Camera }: { prompt: string; onT
   return (
     <div className="flex w-full flex-col items-center gap-4">
       {typing ? (
-        <TypedTagForm onTag={accept} onClose={() => setTyping(false)} disabled={busy} />
+        // A basket holds several tags: the field stays open for the next one.
+        <TypedCodeForm
+          label="Asset tag"
+          submitLabel="Use this tag"
+          cancelLabel="Close"
+          autoCapitalize="characters"
+          schema={cribTagSchema}
+          invalidMessage="Type the tool’s tag."
+          onCode={accept}
+          onCancel={() => setTyping(false)}
+          clearAfterCode
+          disabled={busy}
+        />
       ) : (
         <>
           <div className="flex aspect-[4/3] w-full max-w-[22rem] flex-col overflow-hidden rounded-2xl border-4 border-dashed border-ink-muted p-2">

@@ -1,9 +1,10 @@
+import { badgeCodeSchema } from '@chuckkey/core';
 import { useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
+import { TypedCodeForm } from '@/components/ui/typed-code-form';
 import { useScannerWedge } from '@/hooks/use-scanner-wedge';
 import { BadgeCamera } from './badge-camera';
-import { TypedBadgeForm } from './typed-badge-form';
 
 interface BadgeReaderProps {
   prompt: string;
@@ -30,7 +31,17 @@ export function BadgeReader({ prompt, onBadge, busy = false, message, camera = t
   return (
     <div className="flex w-full flex-col items-center gap-5">
       {typing ? (
-        <TypedBadgeForm onCode={accept} onCancel={() => setTyping(false)} disabled={busy} />
+        <TypedCodeForm
+          label="Badge code"
+          submitLabel="Use this code"
+          cancelLabel="Cancel"
+          autoCapitalize="none"
+          schema={badgeCodeSchema}
+          invalidMessage="That is not a badge code."
+          onCode={accept}
+          onCancel={() => setTyping(false)}
+          disabled={busy}
+        />
       ) : (
         <>
           {/* The outline has the proportions of the badge card (ISO/IEC 7810 ID-1, 85.60 × 53.98 mm). */}

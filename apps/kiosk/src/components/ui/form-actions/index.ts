@@ -1,0 +1,1 @@
+export { FormActions } from './form-actions';

@@ -1,0 +1,1 @@
+export { TypedCodeForm } from './typed-code-form';
