@@ -1,7 +1,8 @@
 /**
  * Fills a migrated, empty database with a shop the size the scan benchmark asks for (see
  * scripts/bench-scan.mjs): 10,000 members with badges, 100 machines with paired stations and
- * 1,000,000 past sessions, a year of reservations on every machine, opening hours and closures.
+ * 1,000,000 past sessions, a year of reservations on every machine, opening hours and closures,
+ * and a crib with a year of loans and some tools overdue, with the shop's overdue block on.
  * Writes the badge codes and station device tokens it made, as JSON, to
  * the file named by BENCH_OUTPUT. Never run it against a database that holds real data.
  */
@@ -18,6 +19,8 @@ const TRAININGS = 20;
 const SESSIONS = 1_000_000;
 /** Each machine has a two-hour reservation every RESERVATION_EVERY_HOURS, a year back and a fortnight ahead. */
 const RESERVATION_EVERY_HOURS = 6;
+/** Tools in the crib; a year of daily loans of each makes about 180,000 returned checkouts. */
+const CRIB_TOOLS = 500;
 const BATCH = 1_000;
 
 function env(name: string): string {
@@ -170,6 +173,33 @@ async function main(): Promise<void> {
          cross join generate_series(-365 * 24 / ${RESERVATION_EVERY_HOURS}, 14 * 24 / ${RESERVATION_EVERY_HOURS}) g
          cross join lateral (select date_trunc('hour', now()) + g * interval '${RESERVATION_EVERY_HOURS} hours' + (m.n % 4) * interval '1 hour' as starts) r`,
       );
+    });
+
+    await timed('a crib of 500 tools, a year of returned loans, 400 out (100 overdue), the overdue block on', async () => {
+      await db.raw(
+        `insert into crib_items (kind, name, asset_tag, condition, bin_location)
+         select 'tool', 'Tool ' || g, 'B-' || lpad(g::text, 4, '0'), 'good', 'Bin ' || (g % 40) from generate_series(1, ${CRIB_TOOLS}) g`,
+      );
+      // A loan a tool a day for a year, each back the same day; then 400 tools out now, the first 100 overdue.
+      await db.raw(
+        `with t as (select id, row_number() over (order by asset_tag) n from crib_items),
+              p as (select array_agg(id order by email) ids from members)
+         insert into crib_checkouts (item_id, item_kind, member_id, quantity, checked_out_at, due_at, returned_at, return_condition)
+         select t.id, 'tool', p.ids[(1 + (g::bigint * 7919 + t.n * 104729) % ${MEMBERS})::int], 1,
+                now() - (g + 1) * interval '1 day', now() - (g + 1) * interval '1 day' + interval '8 hours',
+                now() - (g + 1) * interval '1 day' + interval '4 hours', 'good'
+         from t cross join p cross join generate_series(1, 365) g`,
+      );
+      await db.raw(
+        `with t as (select id, row_number() over (order by asset_tag) n from crib_items),
+              p as (select array_agg(id order by email) ids from members)
+         insert into crib_checkouts (item_id, item_kind, member_id, quantity, checked_out_at, due_at)
+         select t.id, 'tool', p.ids[(1 + t.n * 24593 % ${MEMBERS})::int], 1, now() - interval '5 days',
+                case when t.n <= 100 then now() - interval '4 days' else now() + interval '1 day' end
+         from t cross join p where t.n <= 400`,
+      );
+      // Rule 8 on: every scan then probes the member's open tools (the dearer path).
+      await db('shop').where({ id: 1 }).update({ overdue_checkout_block_days: 3 });
     });
 
     // A shop's tables are vacuumed and checkpointed in the normal run of things; doing it here keeps
