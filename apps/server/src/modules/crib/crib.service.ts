@@ -9,6 +9,7 @@ import {
   type CribRestoreInput,
   type CribReturnInput,
 } from '@chuckkey/core';
+import type { Db } from '../../lib/db';
 import type { Deps } from '../../lib/deps';
 import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
 import { sniffType } from '../../lib/uploads';
@@ -48,6 +49,19 @@ export const toCheckout = (row: CribCheckoutRecord): CribCheckout => ({
   dueAt: row.dueAt ? row.dueAt.toISOString() : null,
   returnedAt: row.returnedAt ? row.returnedAt.toISOString() : null,
 });
+
+/**
+ * When a tool lent at `now` is due back, by the shop's hours as `db` (a transaction or not) reads
+ * them. The reads run one after the other, since a transaction's connection takes one at a time.
+ */
+export async function toolDueAt(db: Db, loanPeriodHours: number | null, now: Date): Promise<Date> {
+  const shop = shopRepository(db);
+  const { timeZone } = await shop.get();
+  const weekly = await shop.weeklyHours();
+  // Yesterday's closures too: a closure is whole days of the shop's calendar, which may be behind UTC.
+  const closures = await shop.closuresFrom(new Date(now.getTime() - DAY_MS).toISOString().slice(0, 10));
+  return cribDueAt(loanPeriodHours, { weekly, closures, timeZone }, now);
+}
 
 /**
  * The tool crib. Checkouts and returns take the person who records them as `actor`, so a crib
@@ -182,7 +196,9 @@ export function cribService({ db }: Deps) {
     async checkOut(actor: Express.User, input: CribCheckoutInput, now = new Date(), context: Record<string, unknown> = {}): Promise<CribCheckout> {
       return db.transaction(async (trx) => {
         const repository = cribRepository(trx);
-        const [item, memberActive] = await Promise.all([repository.findItem(input.itemId), repository.memberActive(input.memberId)]);
+        // One after the other: a transaction's connection runs one query at a time.
+        const item = await repository.findItem(input.itemId);
+        const memberActive = await repository.memberActive(input.memberId);
         if (!item) throw itemNotFound();
         if (memberActive === null) throw notFound('member_not_found', 'There is no member with that id.');
         // Refused as at the crib station: an inactive account takes nothing from the crib.
@@ -192,14 +208,7 @@ export function cribService({ db }: Deps) {
         let dueAt: Date | null = null;
         if (item.kind === 'tool') {
           if (input.quantity !== 1) throw badRequest('tool_quantity', 'A tool is checked out one at a time.', { quantity: ['A tool is checked out one at a time.'] });
-          const shop = shopRepository(trx);
-          // Yesterday's closures too: a closure is whole days of the shop's calendar, which may be behind UTC.
-          const [{ timeZone }, weekly, closures] = await Promise.all([
-            shop.get(),
-            shop.weeklyHours(),
-            shop.closuresFrom(new Date(now.getTime() - DAY_MS).toISOString().slice(0, 10)),
-          ]);
-          dueAt = cribDueAt(item.loanPeriodHours, { weekly, closures, timeZone }, now);
+          dueAt = await toolDueAt(trx, item.loanPeriodHours, now);
         } else if (!(await repository.takeStock(item.id, input.quantity))) {
           throw shortStock();
         }

@@ -74,13 +74,12 @@ export function reservationsService(deps: Deps) {
         const { rules } = machine;
         // Yesterday's closures too: a closure is whole days of the shop's calendar, which may be behind UTC.
         const closuresFrom = new Date(input.start.getTime() - DAY).toISOString().slice(0, 10);
-        const [weekly, closures, signOffs, memberReservations, noShows] = await Promise.all([
-          shop.weeklyHours(),
-          shop.closuresFrom(closuresFrom),
-          repository.signOffs(actor.id, requiredTrainings.map((t) => t.id)),
-          repository.memberClaims(machine.id, actor.id, weeks[0]!.start, weeks.at(-1)!.end),
-          repository.noShowsSince(machine.id, actor.id, new Date(now.getTime() - (rules.noShowWindowDays + rules.suspensionDays) * DAY)),
-        ]);
+        // One after the other: a transaction's connection runs one query at a time.
+        const weekly = await shop.weeklyHours();
+        const closures = await shop.closuresFrom(closuresFrom);
+        const signOffs = await repository.signOffs(actor.id, requiredTrainings.map((t) => t.id));
+        const memberReservations = await repository.memberClaims(machine.id, actor.id, weeks[0]!.start, weeks.at(-1)!.end);
+        const noShows = await repository.noShowsSince(machine.id, actor.id, new Date(now.getTime() - (rules.noShowWindowDays + rules.suspensionDays) * DAY));
 
         const refusal = reservationRefusal(
           {

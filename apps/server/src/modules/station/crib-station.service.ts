@@ -1,15 +1,13 @@
-import { cribDueAt, type CribCheckout, type CribStationCheckoutInput, type CribStationConsumable, type CribStationItem, type CribStationMemberResult, type CribStationReturnInput } from '@chuckkey/core';
+import { type CribCheckout, type CribStationCheckoutInput, type CribStationConsumable, type CribStationItem, type CribStationMemberResult, type CribStationReturnInput } from '@chuckkey/core';
 import type { Db } from '../../lib/db';
 import type { Deps } from '../../lib/deps';
 import { AppError, conflict, notFound } from '../../lib/errors';
 import { badgesService } from '../badges/badges.service';
 import { cribRepository } from '../crib/crib.repository';
-import { cribService, toCheckout } from '../crib/crib.service';
+import { cribService, toCheckout, toolDueAt } from '../crib/crib.service';
 import { membersRepository, toUser } from '../members/members.repository';
-import { shopRepository } from '../shop/shop.repository';
 import type { StationRecord } from '../stations/stations.repository';
 
-const DAY_MS = 86_400_000;
 
 export const notACribStation = () =>
   new AppError(403, 'not_a_crib_station', 'This station is not at the tool crib. Tools are checked out and returned at the crib’s own station.');
@@ -29,13 +27,6 @@ export function cribStationService(deps: Deps) {
   const { db } = deps;
   const badges = badgesService(deps);
 
-  /** When a tool lent now is due back: the same rule and hours the checkout itself uses. */
-  async function dueIfOutNow(loanPeriodHours: number | null, now: Date): Promise<Date> {
-    const shop = shopRepository(db);
-    // Yesterday's closures too: a closure is whole days of the shop's calendar, which may be behind UTC.
-    const [{ timeZone }, weekly, closures] = await Promise.all([shop.get(), shop.weeklyHours(), shop.closuresFrom(new Date(now.getTime() - DAY_MS).toISOString().slice(0, 10))]);
-    return cribDueAt(loanPeriodHours, { weekly, closures, timeZone }, now);
-  }
 
   async function openCheckoutByTag(repository: ReturnType<typeof cribRepository>, tag: string) {
     const item = await repository.findToolByTag(tag);
@@ -57,7 +48,7 @@ export function cribStationService(deps: Deps) {
 
     async lookup(tag: string, now: Date): Promise<{ item: CribStationItem }> {
       const { item, open } = await openCheckoutByTag(cribRepository(db), tag);
-      const dueAt = await dueIfOutNow(item.loanPeriodHours, now);
+      const dueAt = await toolDueAt(db, item.loanPeriodHours, now);
       return {
         item: {
           id: item.id,
