@@ -2,7 +2,8 @@
  * Fills a migrated, empty database with a shop the size the scan benchmark asks for (see
  * scripts/bench-scan.mjs): 10,000 members with badges, 100 machines with paired stations and
  * 1,000,000 past sessions, a year of reservations on every machine, opening hours and closures,
- * and a crib with a year of loans and some tools overdue, with the shop's overdue block on.
+ * a crib with a year of loans and some tools overdue, with the shop's overdue block on, and four
+ * blocking maintenance tasks a machine with a year of completions.
  * Writes the badge codes and station device tokens it made, as JSON, to
  * the file named by BENCH_OUTPUT. Never run it against a database that holds real data.
  */
@@ -200,6 +201,21 @@ async function main(): Promise<void> {
       );
       // Rule 8 on: every scan then probes the member's open tools (the dearer path).
       await db('shop').where({ id: 1 }).update({ overdue_checkout_block_days: 3 });
+    });
+
+    await timed('4 blocking maintenance tasks a machine, a year of weekly completions, none overdue', async () => {
+      // Blocking, so every scan reads each task's latest completion (the dearer path); done a day
+      // ago at the machine's meter, so nothing is overdue and the scans still clear.
+      await db.raw(
+        `insert into maintenance_tasks (machine_id, name, every_hours, every_days, blocking, start_meter_hours, created_at)
+         select m.id, 'Task ' || g, case when g <= 2 then 500 end, case when g > 2 then 90 end, true, m.meter_hours, now() - interval '1 year'
+         from machines m cross join generate_series(1, 4) g`,
+      );
+      await db.raw(
+        `insert into maintenance_completions (task_id, done_at, meter_hours, note)
+         select t.id, now() - interval '1 day' - w * interval '7 days', m.meter_hours, 'Done.'
+         from maintenance_tasks t join machines m on m.id = t.machine_id cross join generate_series(0, 51) w`,
+      );
     });
 
     // A shop's tables are vacuumed and checkpointed in the normal run of things; doing it here keeps

@@ -3,8 +3,8 @@ import { expect, signOut, test } from './fixtures';
 
 const linksByRole: Record<Role, string[]> = {
   member: ['Shop floor', 'Reserve', 'My record', 'Profile'],
-  instructor: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach'],
-  admin: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach', 'People', 'Crib', 'Setup', 'Outbox'],
+  instructor: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach', 'Upkeep'],
+  admin: ['Shop floor', 'Reserve', 'My record', 'Profile', 'Teach', 'People', 'Crib', 'Upkeep', 'Usage', 'Setup', 'Outbox'],
 };
 
 const article = (role: Role) => (role === 'admin' || role === 'instructor' ? 'an' : 'a');

@@ -9,6 +9,7 @@ import { createSessionMiddleware } from './middleware/session';
 import { stationRequestCheck } from './middleware/station-csrf';
 import { authRoutes } from './modules/auth/auth.routes';
 import { healthRoutes } from './modules/health/health.routes';
+import { incidentsRoutes } from './modules/incidents/incidents.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
 import { outboxRoutes } from './modules/outbox/outbox.routes';
@@ -23,12 +24,15 @@ import { badgesRoutes } from './modules/badges/badges.routes';
 import { boardRoutes } from './modules/board/board.routes';
 import { classesRoutes } from './modules/classes/classes.routes';
 import { cribRoutes } from './modules/crib/crib.routes';
+import { maintenanceRoutes } from './modules/maintenance/maintenance.routes';
 import { waiversRoutes } from './modules/waivers/waivers.routes';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { machinesRoutes } from './modules/machines/machines.routes';
 import { signOffsRoutes } from './modules/sign-offs/sign-offs.routes';
 import { teachRoutes } from './modules/teach/teach.routes';
 import { trainingsRoutes } from './modules/trainings/trainings.routes';
+import { denialRecorder } from './modules/reports/denial-recorder';
+import { reportsRoutes } from './modules/reports/reports.routes';
 import { staticApps } from './static-apps';
 
 export function createApp(deps: Deps) {
@@ -58,7 +62,9 @@ export function createApp(deps: Deps) {
   api.use('/health', healthRoutes(deps));
   // A station is a device, not a person's sign-in: its routes neither read nor roll a web
   // session (each scan would otherwise cost a session read and write; docs/decisions/008).
-  api.use('/station', stationRequestCheck, stationRoutes(deps));
+  // Refused scans are written in batches beside the answers (docs/decisions/015); close() writes the rest.
+  const denials = denialRecorder(deps);
+  api.use('/station', stationRequestCheck, stationRoutes(deps, denials));
   // Calendar readers hold no sign-in: the feed's secret is its own key, so no session is read.
   api.use('/calendar', calendarFeedRoutes(deps));
   api.use(sessions.middleware);
@@ -79,12 +85,15 @@ export function createApp(deps: Deps) {
   api.use('/teach', teachRoutes(deps));
   api.use('/audit', auditRoutes(deps));
   api.use('/crib', cribRoutes(deps));
+  api.use('/incidents', incidentsRoutes(deps));
   api.use(machinesRoutes(deps));
   api.use(tagOutsRoutes(deps));
+  api.use(maintenanceRoutes(deps));
   api.use('/board', boardRoutes(deps));
   api.use('/classes', classesRoutes(deps));
   api.use(signOffsRoutes(deps));
   api.use(reservationsRoutes(deps));
+  api.use('/reports', reportsRoutes(deps));
   api.use(apiNotFound);
   api.use(problemHandler);
 
@@ -92,5 +101,9 @@ export function createApp(deps: Deps) {
   if (config.SERVE_APPS) app.use(staticApps(config));
 
   // The live-updates handshake reads a person's sign-in through the same session and Passport.
-  return { app, close: sessions.close, signIn: { session: sessions.middleware, passport } };
+  const close = async () => {
+    await denials.close();
+    await sessions.close();
+  };
+  return { app, close, signIn: { session: sessions.middleware, passport } };
 }

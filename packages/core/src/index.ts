@@ -29,3 +29,7 @@ export * from './reservations/classes';
 export * from './crib/schemas';
 export * from './crib/due';
 export * from './crib/station-schemas';
+export * from './reports/schemas';
+export * from './maintenance/due';
+export * from './maintenance/schemas';
+export * from './incidents/schemas';

@@ -60,6 +60,19 @@ export const paths = {
   setupWaiver: { path: '/setup/waiver', getHref: () => '/setup/waiver' },
   setupHours: { path: '/setup/hours', getHref: () => '/setup/hours' },
   setupPolicies: { path: '/setup/policies', getHref: () => '/setup/policies' },
+  upkeep: { path: '/upkeep', getHref: () => '/upkeep' },
+  upkeepMachine: {
+    path: '/upkeep/machines/:id',
+    getHref: (id: string) => `/upkeep/machines/${encodeURIComponent(id)}`,
+  },
+  upkeepTagOuts: { path: '/upkeep/tag-outs', getHref: () => '/upkeep/tag-outs' },
+  upkeepIncidents: { path: '/upkeep/incidents', getHref: () => '/upkeep/incidents' },
+  upkeepIncident: {
+    path: '/upkeep/incidents/:id',
+    getHref: (id: string) => `/upkeep/incidents/${encodeURIComponent(id)}`,
+  },
+  reportIncident: { path: '/incidents/new', getHref: () => '/incidents/new' },
+  usage: { path: '/usage', getHref: () => '/usage' },
   outbox: { path: '/outbox', getHref: () => '/outbox' },
 } as const;
 

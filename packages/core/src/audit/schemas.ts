@@ -34,6 +34,12 @@ export const auditActions = [
   'crib.returned',
   'crib.items_imported',
   'crib.item_restored',
+  'incident.reported',
+  'incident.status_changed',
+  'incident.note_added',
+  'maintenance.task_created',
+  'maintenance.task_updated',
+  'maintenance.completed',
 ] as const;
 export type AuditAction = (typeof auditActions)[number];
 

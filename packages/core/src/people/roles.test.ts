@@ -47,6 +47,22 @@ describe('can()', () => {
     expect(can('admin', 'cancel:reservation:any')).toBe(true);
   });
 
+  it('lets instructors and admins see maintenance and mark it done, and only admins set tasks up', () => {
+    expect(can('member', 'read:maintenance:any')).toBe(false);
+    expect(can('member', 'complete:maintenance:any')).toBe(false);
+    expect(can('instructor', 'read:maintenance:any')).toBe(true);
+    expect(can('instructor', 'complete:maintenance:any')).toBe(true);
+    expect(can('instructor', 'manage:maintenance:any')).toBe(false);
+    expect(can('admin', 'manage:maintenance:any')).toBe(true);
+  });
+
+  it('lets instructors and admins read the list of tag-outs, and not members (who may still tag a machine out)', () => {
+    expect(can('member', 'read:tag-out:any')).toBe(false);
+    expect(can('member', 'create:tag-out:any')).toBe(true);
+    expect(can('instructor', 'read:tag-out:any')).toBe(true);
+    expect(can('admin', 'read:tag-out:any')).toBe(true);
+  });
+
   it('lets an admin do everything in the permission list', () => {
     for (const permission of permissions) {
       expect(can('admin', permission), permission).toBe(true);

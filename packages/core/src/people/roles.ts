@@ -46,6 +46,7 @@ export const permissions = [
   'create:tag-out:any',
   'clear:tag-out:own',
   'clear:tag-out:any',
+  'read:tag-out:any',
   'create:reservation:own',
   'cancel:reservation:own',
   'cancel:reservation:any',
@@ -54,6 +55,14 @@ export const permissions = [
   'read:crib:any',
   'read:crib-checkout:own',
   'manage:crib:any',
+  'read:report:any',
+  'create:incident:own',
+  'read:incident:own',
+  'read:incident:any',
+  'review:incident:any',
+  'read:maintenance:any',
+  'complete:maintenance:any',
+  'manage:maintenance:any',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -74,6 +83,10 @@ const memberPermissions: readonly Permission[] = [
   // Members look up what the crib holds and what they have out; admins keep the crib and record loans.
   'read:crib:any',
   'read:crib-checkout:own',
+  // Anyone who sees something happen may report it, and read back what they reported; admins
+  // read every report and review it.
+  'create:incident:own',
+  'read:incident:own',
 ];
 
 /**
@@ -89,9 +102,15 @@ const instructorPermissions: readonly Permission[] = [
   'read:photo:any',
   // Their own tag-outs only: the machine's fault was theirs to judge, and is theirs to judge fixed.
   'clear:tag-out:own',
+  // They see which machines are out of service and why, to find the ones they tagged and clear them.
+  'read:tag-out:any',
   // They hold machines for the classes they teach and book members in; cancelling one is its holder's
   // call (or an admin's, through 'cancel:class:any').
   'manage:class:any',
+  // They are on the floor when a machine comes due: they see what is due and record the work done.
+  // Setting up and changing the tasks stays with admins.
+  'read:maintenance:any',
+  'complete:maintenance:any',
 ];
 
 export const permissionsByRole: Record<Role, readonly Permission[]> = {

@@ -98,6 +98,8 @@ export const stationStateSchema = z.object({
   today: z
     .array(z.object({ startsAt: z.string(), endsAt: z.string(), kind: z.enum(['member', 'class']), memberFirstName: z.string() }))
     .optional(),
+  // The machine's open tag-out: the station shows it out of service with its reason.
+  taggedOut: z.object({ reason: z.string(), since: z.string() }).nullable().optional(),
 });
 export type StationState = z.infer<typeof stationStateSchema>;
 

@@ -22,6 +22,9 @@ const navItems: NavItem[] = [
   { label: 'Teach', to: paths.teach.getHref(), permission: 'create:sign-off:any' },
   { label: 'People', to: paths.people.getHref(), permission: 'read:member:any' },
   { label: 'Crib', to: paths.crib.getHref(), permission: 'manage:crib:any' },
+  // Instructors see Upkeep too: they clear the tag-outs they set and mark maintenance done.
+  { label: 'Upkeep', to: paths.upkeep.getHref(), permission: 'read:tag-out:any' },
+  { label: 'Usage', to: paths.usage.getHref(), permission: 'read:report:any' },
   { label: 'Setup', to: paths.setup.getHref(), permission: 'manage:machine:any' },
   { label: 'Outbox', to: paths.outbox.getHref(), permission: 'read:outbox:any' },
 ];

@@ -22,6 +22,8 @@ export interface ScanFacts {
   };
   /** The machine's open tag-out (rule 4). */
   taggedOut: { reason: string; since: Date } | null;
+  /** The machine's active blocking maintenance tasks past due at the scan's instant, by name (rule 4). */
+  overdueBlockingTasks: { name: string }[];
   member: { id: string; firstName: string; role: Role; active: boolean; waiverOnFile: boolean; hasPhoto: boolean } | null;
   /** `nextClass`: the start of the soonest class meeting teaching the training, on any machine. */
   requiredTrainings: { id: string; name: string; teachers: string[]; nextClass: Date | null }[];
@@ -83,7 +85,8 @@ export const TEACHERS_NAMED = 3;
  * three instructors who signed each off lately, the member's sign-offs for those trainings in any
  * state, a supervisor on duty, the machine's running session and open tag-out (rule 4), and the
  * shop's weekly hours and the closures around today (rule 7), and the machine's live reservations
- * near $5, the scan's instant (rule 6 and check-in), and the shop's overdue-tool policy with, while it is on, the
+ * near $5, the scan's instant (rule 6 and check-in), the machine's blocking maintenance tasks past due
+ * at $5 (rule 4), and the shop's overdue-tool policy with, while it is on, the
  * member's crib tools out past their due time at $5 (rule 8). With no badge hash (null) the member parts come back empty. The
  * shop's time zone comes along for the wording of times and for deciding whether the shop is open.
  *
@@ -195,7 +198,27 @@ select
     where (select overdue_checkout_block_days from shop where id = 1) is not null
       and c.member_id = (select id from holder) and c.item_kind = 'tool' and c.returned_at is null
       and c.due_at < $5::timestamptz
-  ) as "overdueCheckouts"
+  ) as "overdueCheckouts",
+  (
+    -- Core's maintenanceDue in SQL (a test compares the two): past due is the meter above the last
+    -- completion's reading (or the reading when the task was set up) plus the hours, or the shop's
+    -- date after the date of that completion (or set-up) plus the days. A machine has a few tasks;
+    -- each one's latest completion is the first entry of its index.
+    select coalesce(json_agg(json_build_object('name', t.name) order by t.name), '[]')
+    from maintenance_tasks t
+    join machines m on m.id = t.machine_id
+    left join lateral (
+      select c.done_at, c.meter_hours from maintenance_completions c
+      where c.task_id = t.id order by c.done_at desc, c.id desc limit 1
+    ) last on true
+    cross join (select time_zone from shop where id = 1) z
+    where t.machine_id = (select id from machine) and t.active and t.blocking
+      and (
+        (t.every_hours is not null and m.meter_hours > coalesce(last.meter_hours, t.start_meter_hours) + t.every_hours)
+        or (t.every_days is not null
+          and ($5::timestamptz at time zone z.time_zone)::date > (coalesce(last.done_at, t.created_at) at time zone z.time_zone)::date + t.every_days)
+      )
+  ) as "overdueBlockingTasks"
 `;
 }
 
@@ -216,6 +239,7 @@ interface FactsRow {
   reservations: (Omit<ScanReservation, 'startsAt' | 'endsAt'> & { startsAt: string; endsAt: string })[];
   overdueCheckoutBlockDays: number | null;
   overdueCheckouts: { itemName: string; dueAt: string }[];
+  overdueBlockingTasks: { name: string }[];
 }
 
 interface StationJson {
@@ -238,6 +262,7 @@ function toFacts(row: FactsRow, machine: ScanFacts['machine']): ScanFacts {
     timeZone: row.timeZone ?? 'UTC',
     machine,
     taggedOut: row.taggedOut ? { reason: row.taggedOut.reason, since: new Date(row.taggedOut.since) } : null,
+    overdueBlockingTasks: row.overdueBlockingTasks,
     member: row.member,
     requiredTrainings: row.requiredTrainings.map(({ nextClassAt, ...training }) => ({ ...training, nextClass: date(nextClassAt) })),
     signOffs: row.signOffs.map((s) => ({ ...s, expiresAt: date(s.expiresAt), revokedAt: date(s.revokedAt) })),

@@ -20,6 +20,8 @@ import { badgeCodeHash } from '@chuckkey/db';
 import type { Deps } from '../../lib/deps';
 import { AppError, badRequest, conflict, notFound, pgCode, UNIQUE_VIOLATION } from '../../lib/errors';
 import { badgesService } from '../badges/badges.service';
+import type { DenialRecorder } from '../reports/denial-recorder';
+import { denialsOfScan } from '../reports/denials-of-scan';
 import { releaseReservation } from '../reservations/reservation-release';
 import { reservationsRepository } from '../reservations/reservations.repository';
 import { grantToken, grantValid } from '../../lib/tokens';
@@ -52,9 +54,9 @@ function hashOf(badge: string): string | null {
 }
 
 /**
- * The maintenance and balance facts are empty because the shop keeps none of those records yet;
- * the rules for them are already in the decision. The open tag-out, the reservations, and the
- * shop's overdue-tool policy with the member's overdue crib tools (rule 8) are read with the other
+ * The balance facts are empty because the shop keeps no balances yet; the rule for them is
+ * already in the decision. The open tag-out and the overdue blocking maintenance tasks (rule 4),
+ * the reservations, and the shop's overdue-tool policy with the member's overdue crib tools (rule 8) are read with the other
  * facts. Whether the shop is open comes from its hours and closures, in its
  * time zone.
  *
@@ -73,7 +75,7 @@ function clearanceFacts(facts: ScanFacts & { member: NonNullable<ScanFacts['memb
       name: facts.machine.name,
       requiredTrainings: facts.requiredTrainings.map((t) => ({ id: t.id, name: t.name, teachers: t.teachers, nextClass: t.nextClass && { startsAt: t.nextClass } })),
       taggedOut: facts.taggedOut,
-      overdueBlockingTasks: [],
+      overdueBlockingTasks: facts.overdueBlockingTasks,
       protectionMinutes: facts.machine.checkInMinutes,
     },
     signOffs: facts.signOffs,
@@ -134,7 +136,8 @@ export function stationPhotoAllowed(secret: string, stationId: string, memberId:
   return grantValid(secret, photoSubject(stationId, memberId), token, now);
 }
 
-export function machineSessionsService(deps: Deps) {
+/** `denials` records refused scans for the usage review; without it (background jobs) none are kept. */
+export function machineSessionsService(deps: Deps, { denials }: { denials?: DenialRecorder } = {}) {
   const { db, live } = deps;
   const sessions = machineSessionsRepository(db);
   const badges = badgesService(deps);
@@ -155,6 +158,8 @@ export function machineSessionsService(deps: Deps) {
   function scanResult(station: StationRecord, facts: ScanFacts, now: Date): StationScanResult {
     const member = facts.member;
     const decision = member ? evaluateClearance(clearanceFacts({ ...facts, member }, facts.timeZone, now), now) : null;
+    // Queued only: the answer does not wait on the write.
+    denials?.record(denialsOfScan(station.id, facts, decision, now));
     const running = facts.runningSession;
     const common = {
       requiresPin: facts.machine.requiresPin,
@@ -306,6 +311,7 @@ export function machineSessionsService(deps: Deps) {
           ? { startsAt: next.startsAt.toISOString(), endsAt: next.endsAt.toISOString(), memberId: next.memberId, memberFirstName: next.memberFirstName }
           : null,
         today: today.map((r) => ({ startsAt: r.startsAt.toISOString(), endsAt: r.endsAt.toISOString(), kind: r.kind, memberFirstName: r.memberFirstName })),
+        taggedOut: facts.taggedOut ? { reason: facts.taggedOut.reason, since: facts.taggedOut.since.toISOString() } : null,
       };
     },
 

@@ -9,6 +9,7 @@ import {
   stationMemberLookupSchema,
   stationScanSchema,
   stationSignOffSchema,
+  stationTagOutSchema,
 } from '@chuckkey/core';
 import { z } from 'zod';
 import type { Deps } from '../../lib/deps';
@@ -17,9 +18,11 @@ import { AppError } from '../../lib/errors';
 import { parse, ValidationError, zodFieldErrors } from '../../lib/validate';
 import { currentStation, deviceKey, requireStation, setStationCookie, stationFromRequest } from '../../middleware/station-auth';
 import { badgesService } from '../badges/badges.service';
+import type { DenialRecorder } from '../reports/denial-recorder';
 import { machineNotFound, machineSessionsService, notAMachineStation, stationPhotoAllowed } from '../machine-sessions/machine-sessions.service';
 import { cribStationRoutes } from './crib-station.routes';
 import { reservationCheckInService } from './reservation-check-in.service';
+import { stationTagOutService } from './station-tag-out.service';
 import { stationService } from './station.service';
 
 /**
@@ -36,9 +39,9 @@ const reservationParams = z.object({ id: z.uuid({ error: 'Not a reservation id.'
  * person's sign-in): app.ts mounts them before it, with their own CSRF defence
  * (middleware/station-csrf.ts).
  */
-export function stationRoutes(deps: Deps): Router {
+export function stationRoutes(deps: Deps, denials?: DenialRecorder): Router {
   const service = stationService(deps);
-  const sessions = machineSessionsService(deps);
+  const sessions = machineSessionsService(deps, { denials });
   // Counted per device credential, not per address: several stations may share one address behind the shop's router.
   const scanLimit = perDeviceLimit(deps.config.STATION_SCAN_LIMIT_PER_MINUTE, TOO_MANY_SCANS, deviceKey);
   const router = Router();
@@ -131,6 +134,12 @@ export function stationRoutes(deps: Deps): Router {
     const { id } = parse(reservationParams, req.params, 'params');
     const { badge } = parse(reservationCheckInSchema, req.body, 'body');
     res.json(await checkIns.checkIn(currentStation(req), id, badge, new Date()));
+  });
+
+  const tagOuts = stationTagOutService(deps);
+  router.post('/tag-out', async (req, res) => {
+    const input = parse(stationTagOutSchema, req.body, 'body');
+    res.status(201).json(await tagOuts.report(currentStation(req), input, new Date()));
   });
 
   router.post('/duty', async (req, res) => {

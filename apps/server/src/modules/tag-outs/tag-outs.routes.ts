@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { idParamsSchema, tagOutClearSchema, tagOutCreateSchema } from '@chuckkey/core';
+import { idParamsSchema, tagOutClearSchema, tagOutCreateSchema, tagOutListQuerySchema } from '@chuckkey/core';
 import type { Deps } from '../../lib/deps';
 import { parse } from '../../lib/validate';
 import { currentUser, requirePermission } from '../../middleware/auth';
@@ -9,6 +9,12 @@ import { tagOutsService } from './tag-outs.service';
 export function tagOutsRoutes(deps: Deps): Router {
   const service = tagOutsService(deps);
   const router = Router();
+
+  router.get('/tag-outs', requirePermission('read:tag-out:any'), async (req, res) => {
+    const { open } = parse(tagOutListQuerySchema, req.query, 'query');
+    res.setHeader('Cache-Control', 'no-store');
+    res.json({ items: await service.list(open) });
+  });
 
   router.post('/machines/:id/tag-out', requirePermission('create:tag-out:any'), async (req, res) => {
     const { id } = parse(idParamsSchema, req.params, 'params');

@@ -1,8 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { clearedTagOutSchema, tagOutSchema } from '@chuckkey/core';
+import { clearedTagOutSchema, tagOutListSchema, tagOutSchema } from '@chuckkey/core';
 import { createMachine } from '@chuckkey/db/factories';
-import { browser, createTestContext, signedIn, type TestContext } from '../../test/harness';
+import { browser, caughtMail, createTestContext, signedIn, type TestContext } from '../../test/harness';
 
 let ctx: TestContext;
 beforeAll(() => {
@@ -160,5 +160,79 @@ describe('the tag_outs table', () => {
     const { machine } = await taggedOutMachine();
     // The partial unique index, not only the service, keeps the second one out.
     await expect(ctx.db('tag_outs').insert({ machine_id: machine.id, reason: 'Second tag.' })).rejects.toMatchObject({ code: '23505' });
+  });
+});
+
+describe('the admins’ mail about a tag-out', () => {
+  it('tells every active admin who reported which machine, why and when, with a link to Upkeep › Tag-outs', async () => {
+    const admin = await signedIn(ctx, 'admin');
+    const machine = await createMachine(ctx.db, { name: `Bandsaw ${randomUUID().slice(0, 6)}` });
+    const member = await signedIn(ctx, 'member', { first_name: 'Odile', last_name: 'Brandt' });
+
+    const res = await member.post(tagOut(machine.id), { reason: 'Blade guard bent.' });
+    expect(res.status).toBe(201);
+
+    const mail = await caughtMail(ctx.db, admin.member.email);
+    expect(mail.subject).toBe(`Tagged out: ${machine.name}`);
+    expect(mail.text).toContain(`Odile Brandt tagged out the ${machine.name} on `);
+    expect(mail.text).toContain('Reason: Blade guard bent.');
+    // The time is written in the shop's zone as Intl's en-US full date (IANA tz database via Intl).
+    const shop = await ctx.db('shop').first('time_zone').where({ id: 1 });
+    const day = new Intl.DateTimeFormat('en-US', { dateStyle: 'full', timeZone: shop.time_zone }).format(new Date(res.body.reportedAt));
+    expect(mail.text).toContain(day);
+    expect(mail.text).toContain(`${ctx.config.publicUrl}/upkeep/tag-outs`);
+  });
+
+  it('is not sent to a deactivated admin', async () => {
+    const gone = await signedIn(ctx, 'admin');
+    await ctx.db('members').where({ id: gone.member.id }).update({ active: false });
+    const active = await signedIn(ctx, 'admin');
+    const machine = await createMachine(ctx.db);
+    expect((await (await signedIn(ctx, 'member')).post(tagOut(machine.id), { reason: 'Table lock slips.' })).status).toBe(201);
+
+    // Both would be on the one message: once the active admin has it, the other is known left out.
+    const mail = await caughtMail(ctx.db, active.member.email);
+    expect(mail.subject).toBe(`Tagged out: ${machine.name}`);
+    const rows = await ctx.db('outbox_messages').select('id').where({ subject: mail.subject }).whereRaw('? = any(to_addresses)', [gone.member.email]);
+    expect(rows).toEqual([]);
+  });
+});
+
+describe('GET /api/tag-outs', () => {
+  it('lists open tag-outs for an admin with the machine and reporter, and cleared ones with the note under open=false', async () => {
+    const { machine, reporter, tag } = await taggedOutMachine('member');
+    const admin = await signedIn(ctx, 'admin');
+
+    const open = await admin.get('/api/tag-outs');
+    expect(open.status).toBe(200);
+    const listed = tagOutListSchema.parse(open.body).items.find((item) => item.id === tag.id);
+    expect(listed).toEqual({
+      ...tag,
+      machineName: machine.name,
+      reportedBy: { id: reporter.member.id, firstName: reporter.member.first_name, lastName: reporter.member.last_name },
+      clearedAt: null,
+      clearedBy: null,
+      clearNote: null,
+    });
+
+    await admin.post(`${tagOut(machine.id)}/clear`, { note: 'Gib adjusted.' });
+    const stillOpen = tagOutListSchema.parse((await admin.get('/api/tag-outs?open=true')).body).items;
+    expect(stillOpen.map((item) => item.id)).not.toContain(tag.id);
+    const cleared = tagOutListSchema.parse((await admin.get('/api/tag-outs?open=false')).body).items.find((item) => item.id === tag.id);
+    expect(cleared).toMatchObject({ clearNote: 'Gib adjusted.', clearedBy: { id: admin.member.id } });
+    expect(cleared?.clearedAt).toEqual(expect.any(String));
+  });
+
+  it('lets an instructor read the list, refuses a member with 403 and the signed-out with 401', async () => {
+    expect((await (await signedIn(ctx, 'instructor')).get('/api/tag-outs')).status).toBe(200);
+    const member = await (await signedIn(ctx, 'member')).get('/api/tag-outs');
+    expect(member.status).toBe(403);
+    expect((await (await browser(ctx)).get('/api/tag-outs')).status).toBe(401);
+  });
+
+  it('answers 400 validation_failed for an open that is neither true nor false', async () => {
+    const res = await (await signedIn(ctx, 'admin')).get('/api/tag-outs?open=yes');
+    expect(res.status).toBe(400);
+    expect(res.body.errors.open).toBeDefined();
   });
 });

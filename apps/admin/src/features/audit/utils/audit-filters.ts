@@ -42,6 +42,12 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'crib.returned': 'Crib item returned',
   'crib.items_imported': 'Crib inventory imported',
   'crib.item_restored': 'Crib tool back in circulation',
+  'maintenance.task_created': 'Maintenance task added',
+  'maintenance.task_updated': 'Maintenance task changed',
+  'maintenance.completed': 'Maintenance done',
+  'incident.reported': 'Incident reported',
+  'incident.status_changed': 'Incident status changed',
+  'incident.note_added': 'Incident note added',
 };
 
 export function isAuditAction(value: string | null): value is AuditAction {

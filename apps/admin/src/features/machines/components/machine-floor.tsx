@@ -1,5 +1,5 @@
 import type { BoardMachine, LinkStatus, MachineDetail } from '@chuckkey/core';
-import { useId } from 'react';
+import { useId, type ReactNode } from 'react';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { QueryError } from '../../../components/ui/query-error';
 import { Spinner } from '../../../components/ui/spinner';
@@ -11,13 +11,17 @@ import { groupByArea, type AreaGroup } from '../utils/group-by-area';
 import { statesById, supervisorLine } from '../utils/machine-state';
 import { Nameplate } from './nameplate';
 
+/** What a person can do about one machine, shown on its plate (the floor itself stays about machines). */
+export type MachineAction = (machine: MachineDetail, live: BoardMachine | undefined) => ReactNode;
+
 interface AreaSectionProps {
   group: AreaGroup<MachineDetail>;
   states: Map<string, BoardMachine>;
   time: (iso: string) => string;
+  action: MachineAction | undefined;
 }
 
-function AreaSection({ group, states, time }: AreaSectionProps) {
+function AreaSection({ group, states, time, action }: AreaSectionProps) {
   const headingId = useId();
   const count = group.machines.length;
   return (
@@ -31,7 +35,7 @@ function AreaSection({ group, states, time }: AreaSectionProps) {
       <ul className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-3 xl:grid-cols-4">
         {group.machines.map((machine) => (
           <li key={machine.id} className="grid">
-            <Nameplate machine={machine} live={states.get(machine.id)} time={time} />
+            <Nameplate machine={machine} live={states.get(machine.id)} time={time} action={action?.(machine, states.get(machine.id))} />
           </li>
         ))}
       </ul>
@@ -61,7 +65,7 @@ function LinkLine({ status, supervisor }: { status: LinkStatus; supervisor: stri
   );
 }
 
-export function MachineFloor() {
+export function MachineFloor({ action }: { action?: MachineAction } = {}) {
   const machines = useMachines();
   const board = useMachineStates();
   const link = useLiveMachines();
@@ -92,7 +96,7 @@ export function MachineFloor() {
         <QueryError error={board.error} what="the machines’ states" onRetry={() => void board.refetch()} retrying={board.isFetching} />
       )}
       {groupByArea(machines.data).map((group) => (
-        <AreaSection key={group.area} group={group} states={states} time={time} />
+        <AreaSection key={group.area} group={group} states={states} time={time} action={action} />
       ))}
     </div>
   );

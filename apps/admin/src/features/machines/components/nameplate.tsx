@@ -1,5 +1,5 @@
 import { machineCategoryLabels, type BoardMachine, type MachineDetail } from '@chuckkey/core';
-import { useId } from 'react';
+import { useId, type ReactNode } from 'react';
 import { formatHours } from '../../../lib/format';
 import { MachineStateLine } from './machine-state-line';
 
@@ -13,10 +13,12 @@ interface NameplateProps {
   live?: BoardMachine | undefined;
   /** Writes an instant on the shop's clock. */
   time: (iso: string) => string;
+  /** What a person can do about the machine, at the foot of the plate. */
+  action?: ReactNode;
 }
 
 /** The machine as its riveted maker's plate: name stamped in capitals on a band, its state and the facts below. */
-export function Nameplate({ machine, live, time }: NameplateProps) {
+export function Nameplate({ machine, live, time, action }: NameplateProps) {
   const nameId = useId();
   return (
     <article aria-labelledby={nameId} className="flex flex-col overflow-hidden rounded-md border-2 border-neutral-800 bg-white">
@@ -64,6 +66,7 @@ export function Nameplate({ machine, live, time }: NameplateProps) {
           </div>
         )}
       </dl>
+      {action && <div className="border-t border-neutral-200 px-3 py-2">{action}</div>}
     </article>
   );
 }

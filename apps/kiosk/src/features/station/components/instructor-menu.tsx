@@ -10,6 +10,7 @@ export function InstructorMenu({
   supervisorOnDuty,
   onDuty,
   onSignOff,
+  onTagOut,
   onContinue,
   endSession,
   onDone,
@@ -18,6 +19,8 @@ export function InstructorMenu({
   supervisorOnDuty?: string | null | undefined;
   onDuty: () => void;
   onSignOff: () => void;
+  /** Offered while the machine is not tagged out already. */
+  onTagOut?: (() => void) | undefined;
   /** Offered when the instructor is cleared to use this machine themselves. */
   onContinue?: (() => void) | undefined;
   /** A running session the instructor may end as a supervisor (or their own). */
@@ -42,6 +45,12 @@ export function InstructorMenu({
           <Icon name="check" className="size-10" />
           Sign off a member
         </Button>
+        {onTagOut ? (
+          <Button onClick={onTagOut} className="min-h-24 w-full">
+            <Icon name="padlock" className="size-10" />
+            Tag out this machine
+          </Button>
+        ) : null}
         {onContinue ? (
           <Button onClick={onContinue} className="min-h-24 w-full">
             <Icon name="chuck" className="size-10" />

@@ -11,6 +11,7 @@ export function RunningScreen({
   firstName,
   startedAt,
   onEnd,
+  onReport,
   ending,
   onBadge,
   scanning,
@@ -23,6 +24,8 @@ export function RunningScreen({
   firstName: string;
   startedAt: string;
   onEnd: () => void;
+  /** "Report a problem": the member tags the machine out, which ends the session. */
+  onReport: () => void;
   ending: boolean;
   onBadge: (code: string) => void;
   scanning: boolean;
@@ -81,9 +84,15 @@ export function RunningScreen({
           </div>
         </div>
       ) : (
-        <Button onClick={() => setConfirming(true)} className="min-h-24 px-16">
-          End session
-        </Button>
+        <div className="flex flex-wrap justify-center gap-4">
+          <Button onClick={() => setConfirming(true)} className="min-h-24 px-16">
+            End session
+          </Button>
+          <Button variant="quiet" onClick={onReport} className="min-h-24">
+            <Icon name="warning" className="size-10" />
+            Report a problem
+          </Button>
+        </div>
       )}
       <BadgeReader prompt="Someone else? Scan a badge" onBadge={onBadge} busy={scanning} message={message} camera={false} />
     </div>

@@ -1,4 +1,4 @@
-import type { SessionStarted, StationScanResult, StationSelf } from '@chuckkey/core';
+import type { SessionStarted, StationScanResult, StationSelf, StationTagOutResult } from '@chuckkey/core';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import { Button } from '@/components/ui/button';
@@ -14,6 +14,7 @@ import { useEndQueue } from '../hooks/use-end-queue';
 import { useHeartbeat } from '../hooks/use-heartbeat';
 import { useIdleReturn } from '@/hooks/use-idle-return';
 import { useStationLost } from '../hooks/use-station-lost';
+import { ReportProblem } from '../../tag-out/components/report-problem';
 import { stationMessage } from '../utils/messages';
 import { reservationLine, reservationWarning } from '../utils/reservation-text';
 import { BadgeReader } from './badge-reader';
@@ -32,6 +33,7 @@ type Screen =
   | { name: 'duty'; instructor: ScannedInstructor }
   | { name: 'sign-off'; instructor: ScannedInstructor }
   | { name: 'safety'; badge: string; answer: StationScanResult }
+  | { name: 'report'; reporter: { badge: string } | 'running' | 'scan' }
   | { name: 'ended'; text: string };
 
 interface Running {
@@ -42,6 +44,12 @@ interface Running {
 
 /** A session this screen started, and when (station clock), until the next state answer knows it. */
 type Started = Running & { at: number };
+
+/** A tag-out this screen reported, and when (station clock), until the next state answer knows it. */
+interface Reported {
+  reason: string;
+  at: number;
+}
 
 const ENDED_SHOWN_MS = 10_000;
 const KEPT_OFFLINE = 'Ending is saved on this station and will be sent when the server is back.';
@@ -59,6 +67,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
   const [started, setStarted] = useState<Started | null>(null);
   const [endedIds, setEndedIds] = useState<ReadonlySet<string>>(new Set());
   const [ending, setEnding] = useState(false);
+  const [reported, setReported] = useState<Reported | null>(null);
   const scanner = useScanBadge();
   const checkIn = useCheckInReservation();
   // Once a minute is enough for the reservation lines; the running clock keeps its own second tick.
@@ -128,6 +137,19 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
   const nextReservation = state.data?.nextReservation ?? null;
   const reservedToday: TimeBarItem[] = (state.data?.today ?? []).map((r) => ({ startsAt: r.startsAt, endsAt: r.endsAt, kind: r.kind, who: r.memberFirstName }));
   const idle = screen.name === 'idle' && !running;
+  const taggedOut =
+    state.data && (!reported || state.dataUpdatedAt >= reported.at) ? (state.data.taggedOut ?? null) : reported ? { reason: reported.reason } : null;
+
+  const onReported = (result: StationTagOutResult) => {
+    setReported({ reason: result.tagOut.reason, at: Date.now() });
+    const endedId = result.endedSessionId;
+    if (endedId) {
+      setEndedIds((current) => new Set([...current, endedId]));
+      setStarted(null);
+    }
+    setMessage(null);
+    setScreen({ name: 'idle' });
+  };
 
   const checkInFor = (badge: string, answer: StationScanResult) => {
     const reservation = answer.nextReservation;
@@ -146,7 +168,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
 
   return (
     <>
-      <StationHeader station={station} compact={screen.name !== 'idle'} inUse={Boolean(running)}>
+      <StationHeader station={station} compact={screen.name !== 'idle'} inUse={Boolean(running)} taggedOut={taggedOut}>
         {idle && state.data ? (
           <TimeBar
             size="mini"
@@ -172,6 +194,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
             startedAt={running.startedAt}
             ending={ending}
             onEnd={() => void endSession(running.id)}
+            onReport={() => setScreen({ name: 'report', reporter: 'running' })}
             onBadge={scan}
             scanning={scanner.isPending}
             message={message}
@@ -189,7 +212,20 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
                 {KEPT_OFFLINE}
               </p>
             ) : null}
+            {taggedOut ? (
+              <p role="status" className="flex max-w-4xl items-center gap-4 text-center text-kiosk-lead font-bold text-balance">
+                <Icon name="padlock" className="size-12 shrink-0" />
+                {/* A reason typed with its own full stop keeps one. */}
+                Tagged out: {taggedOut.reason.replace(/[.!]+$/, '')}. An admin, or the instructor who tagged it, clears it once it is safe.
+              </p>
+            ) : null}
             <BadgeReader prompt="Hold your badge to the camera or scan it" onBadge={scan} busy={scanner.isPending} message={message} />
+            {state.data && !taggedOut ? (
+              <Button variant="quiet" onClick={() => setScreen({ name: 'report', reporter: 'scan' })}>
+                <Icon name="warning" className="size-9" />
+                Report a problem
+              </Button>
+            ) : null}
             {state.data ? (
               <p className="flex items-center gap-3 text-kiosk-body">
                 <Icon name="person" className="size-9" />
@@ -221,6 +257,7 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
             supervisorOnDuty={supervisorOnDuty}
             onDuty={() => setScreen({ name: 'duty', instructor: screen.instructor })}
             onSignOff={() => setScreen({ name: 'sign-off', instructor: screen.instructor })}
+            onTagOut={taggedOut ? undefined : () => setScreen({ name: 'report', reporter: { badge: screen.instructor.badge } })}
             onContinue={
               screen.answer.cleared && !screen.answer.runningSession
                 ? () => setScreen({ name: 'safety', badge: screen.instructor.badge, answer: screen.answer })
@@ -261,6 +298,9 @@ export function StationScreens({ station, timeZone }: { station: StationSelf; ti
             onRefused={() => scan(screen.badge, true)}
             onCancel={toIdle}
           />
+        ) : null}
+        {screen.name === 'report' ? (
+          <ReportProblem reporter={screen.reporter} sessionRunning={Boolean(running)} onReported={onReported} onCancel={toIdle} />
         ) : null}
         {screen.name === 'ended' ? <Ended text={screen.text} onDone={toIdle} /> : null}
       </main>
