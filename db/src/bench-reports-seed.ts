@@ -9,6 +9,7 @@
 import { randomBytes } from 'node:crypto';
 import { writeFileSync } from 'node:fs';
 import knexFactory from 'knex';
+import { env, timed } from './bench-support';
 import { knexConfig } from './config';
 import { hashPassword } from './passwords';
 
@@ -21,20 +22,9 @@ const DENIALS = 150_000;
 /** Each machine has a reservation every RESERVATION_EVERY_HOURS over the year. */
 const RESERVATION_EVERY_HOURS = 4;
 
-function env(name: string): string {
-  const value = process.env[name];
-  if (!value) throw new Error(`${name} is not set`);
-  return value;
-}
-
 async function main(): Promise<void> {
   const db = knexFactory(knexConfig(env('DATABASE_URL'), { min: 1, max: 2 }));
   const output = env('BENCH_OUTPUT');
-  const timed = async (what: string, work: () => Promise<unknown>) => {
-    const started = Date.now();
-    await work();
-    console.log(`  ${what} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
-  };
   const password = randomBytes(12).toString('base64url');
   const email = 'admin@bench.example.org';
   try {

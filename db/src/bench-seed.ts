@@ -11,6 +11,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { writeFileSync } from 'node:fs';
 import knexFactory from 'knex';
 import { badgeCodeBox, badgeCodeHash, generateBadgeCode } from './badge-codes';
+import { env, timed } from './bench-support';
 import { knexConfig } from './config';
 
 const MEMBERS = 10_000;
@@ -24,21 +25,10 @@ const RESERVATION_EVERY_HOURS = 6;
 const CRIB_TOOLS = 500;
 const BATCH = 1_000;
 
-function env(name: string): string {
-  const value = process.env[name];
-  if (!value) throw new Error(`${name} is not set`);
-  return value;
-}
-
 async function main(): Promise<void> {
   const db = knexFactory(knexConfig(env('DATABASE_URL'), { min: 1, max: 2 }));
   const box = badgeCodeBox(env('BADGE_SECRET'));
   const output = env('BENCH_OUTPUT');
-  const timed = async (what: string, work: () => Promise<unknown>) => {
-    const started = Date.now();
-    await work();
-    console.log(`  ${what} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
-  };
   try {
     await timed('areas, members, trainings, machines', async () => {
       await db.raw(`insert into areas (name, sort_order) select 'Area ' || g, g from generate_series(1, 4) g`);
