@@ -96,4 +96,17 @@ describe('kiosk API client', () => {
 
     expect(error).toMatchObject({ status: 502, code: 'http_502' });
   });
+
+  it('gives up on a POST that never answers after its time limit, as not reached (status 0)', async () => {
+    // A fetch that hangs until it is aborted, as over a connection the network dropped silently.
+    const fetchImpl: typeof fetch = (_input, init) =>
+      new Promise((_resolve, reject) => init?.signal?.addEventListener('abort', () => reject(init.signal?.reason as Error)));
+    const api = createApiClient(fetchImpl);
+
+    const error = await api.post('/station/heartbeat', {}, undefined, { timeoutMs: 20 }).catch((caught: unknown) => caught);
+
+    expect(error).toBeInstanceOf(ApiError);
+    expect((error as ApiError).status).toBe(0);
+    expect((error as ApiError).code).toBe('network_error');
+  });
 });

@@ -46,9 +46,13 @@ type Result<S> = S extends z.ZodType ? z.output<S> : void;
  * defence (the server refuses writes without it).
  */
 export function createApiClient(fetchImpl: typeof fetch = (input, init) => globalThis.fetch(input, init)) {
-  async function send(path: string, init: RequestInit): Promise<Response> {
+  async function send(path: string, init: RequestInit, timeoutMs?: number): Promise<Response> {
+    // A network that drops without a word (a half-open connection) would leave a request waiting
+    // for ever; with a time limit it ends as "not reached", like a refused connection.
+    const limit = timeoutMs === undefined ? undefined : AbortSignal.timeout(timeoutMs);
+    const signal = limit && init.signal ? AbortSignal.any([init.signal, limit]) : (limit ?? init.signal);
     try {
-      return await fetchImpl(`/api${path}`, { credentials: 'same-origin', ...init });
+      return await fetchImpl(`/api${path}`, { credentials: 'same-origin', ...init, ...(signal ? { signal } : {}) });
     } catch (cause) {
       if (init.signal?.aborted) throw cause;
       throw new ApiError(0, null, 'The shop’s server does not answer.');
@@ -62,12 +66,17 @@ export function createApiClient(fetchImpl: typeof fetch = (input, init) => globa
     return schema.parse(await response.json());
   }
 
-  async function post<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S): Promise<Result<S>> {
-    const response = await send(path, {
-      method: 'POST',
-      headers: { accept: 'application/json', 'content-type': 'application/json', [STATION_REQUEST_HEADER]: '1' },
-      body: JSON.stringify(body ?? {}),
-    });
+  /** `timeoutMs`: give up after this long, as though the server could not be reached (status 0). */
+  async function post<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S, options: { timeoutMs?: number } = {}): Promise<Result<S>> {
+    const response = await send(
+      path,
+      {
+        method: 'POST',
+        headers: { accept: 'application/json', 'content-type': 'application/json', [STATION_REQUEST_HEADER]: '1' },
+        body: JSON.stringify(body ?? {}),
+      },
+      options.timeoutMs,
+    );
     if (!response.ok) throw new ApiError(response.status, await readProblem(response));
     if (!schema) return undefined as Result<S>;
     return schema.parse(await response.json()) as Result<S>;
@@ -82,6 +91,6 @@ export function apiGet<S extends z.ZodType>(path: string, schema: S, signal?: Ab
   return client.get(path, schema, signal);
 }
 
-export function apiPost<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S): Promise<Result<S>> {
-  return client.post(path, body, schema);
+export function apiPost<S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, schema?: S, options?: { timeoutMs?: number }): Promise<Result<S>> {
+  return client.post(path, body, schema, options);
 }

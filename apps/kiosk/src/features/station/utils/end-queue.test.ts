@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createApiClient } from '@/lib/api-client';
-import { PENDING_ENDS_KEY, endNow, flushPendingEnds, keepPendingEnd, readPendingEnds, type KeyValueStorage } from './end-queue';
+import { END_RETRY_MS } from '../hooks/use-end-queue';
+import { END_SEND_TIMEOUT_MS, PENDING_ENDS_KEY, endNow, flushPendingEnds, keepPendingEnd, readPendingEnds, type KeyValueStorage } from './end-queue';
 
 const SESSION = '6f1c2a8e-3b4d-4e5f-8a9b-0c1d2e3f4a5b';
 const OTHER_SESSION = '7a2b3c4d-5e6f-4a8b-9c0d-1e2f3a4b5c6d';
@@ -128,5 +129,21 @@ describe('the offline end queue', () => {
     expect(readPendingEnds(storage)).toEqual([]);
     storage.setItem(PENDING_ENDS_KEY, JSON.stringify([{ sessionId: 1 }]));
     expect(readPendingEnds(storage)).toEqual([]);
+  });
+
+  it('sends each end with a time limit shorter than the retry interval, so a hung request cannot hold the queue', async () => {
+    const signals: (AbortSignal | null | undefined)[] = [];
+    const client = createApiClient(async (_input, init) => {
+      signals.push(init?.signal);
+      throw new TypeError('fetch failed');
+    });
+    const storage = fakeStorage();
+
+    await endNow(client, storage, { sessionId: SESSION, idempotencyKey: KEY, pressedAt });
+    await flushPendingEnds(client, storage);
+
+    expect(signals).toHaveLength(2);
+    expect(signals.every((signal) => signal instanceof AbortSignal)).toBe(true);
+    expect(END_SEND_TIMEOUT_MS).toBeLessThan(END_RETRY_MS);
   });
 });

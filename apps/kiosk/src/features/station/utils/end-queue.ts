@@ -17,6 +17,13 @@ const pendingEndSchema = z.object({
 });
 export type PendingEnd = z.infer<typeof pendingEndSchema>;
 
+/**
+ * An end that has no answer in this long counts as not reached and is kept (or stays kept): a
+ * request left hanging by a dropped network must not hold the queue. Shorter than the retry
+ * interval, so one pass is over before the next begins.
+ */
+export const END_SEND_TIMEOUT_MS = 8_000;
+
 export type KeyValueStorage = Pick<Storage, 'getItem' | 'setItem' | 'removeItem'>;
 export type EndClient = Pick<ReturnType<typeof createApiClient>, 'post'>;
 
@@ -60,7 +67,7 @@ export function sendEnd(
   input: { sessionId: string; idempotencyKey: string; endedAt?: string | undefined; badge?: string | undefined },
 ): Promise<SessionEnded> {
   const body = { idempotencyKey: input.idempotencyKey, ...(input.endedAt ? { endedAt: input.endedAt } : {}), ...(input.badge ? { badge: input.badge } : {}) };
-  return client.post(`/station/sessions/${encodeURIComponent(input.sessionId)}/end`, body, sessionEndedSchema);
+  return client.post(`/station/sessions/${encodeURIComponent(input.sessionId)}/end`, body, sessionEndedSchema, { timeoutMs: END_SEND_TIMEOUT_MS });
 }
 
 export type EndOutcome =
