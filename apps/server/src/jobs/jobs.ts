@@ -2,6 +2,7 @@ import PgBoss from 'pg-boss';
 import type { Deps } from '../lib/deps';
 import { cribOverdueService } from '../modules/crib/crib-overdue.service';
 import { machineSessionsService } from '../modules/machine-sessions/machine-sessions.service';
+import { reportsRepository } from '../modules/reports/reports.repository';
 import { reservationJobsService } from '../modules/reservations/reservation-jobs.service';
 import { shopRepository } from '../modules/shop/shop.repository';
 import { signOffRemindersService } from '../modules/sign-offs/reminders.service';
@@ -43,6 +44,16 @@ export const CRIB_OVERDUE = 'crib-overdue';
  * checkouts. Each reminder is claimed in the database, so repeated or concurrent runs never send twice.
  */
 export const CRIB_OVERDUE_CRON = '*/15 * * * *';
+
+export const USAGE_TOTALS = 'usage-totals';
+
+/**
+ * Every minute: usage totals marked stale by new weekly hours or a new time zone are worked out
+ * again (docs/decisions/016), so the wait falls on this job rather than on the next person to
+ * open the usage review. Not stale, the run is one read of one row; the rebuild itself takes the
+ * totals' lock, so concurrent runs rebuild once.
+ */
+export const USAGE_TOTALS_CRON = '* * * * *';
 
 export interface Jobs {
   boss: PgBoss;
@@ -89,7 +100,14 @@ export async function startJobs(deps: Deps, options: { schema?: string } = {}): 
   await boss.work(CRIB_OVERDUE, async () => {
     await cribOverdue.sendOverdueNotices(new Date());
   });
+  const reports = reportsRepository(db);
+  await boss.createQueue(USAGE_TOTALS);
+  await boss.schedule(USAGE_TOTALS, USAGE_TOTALS_CRON, {});
+  await boss.work(USAGE_TOTALS, async () => {
+    await reports.refreshTotals();
+  });
   logger.info({ queue: SILENT_STATIONS, cron: SILENT_STATIONS_CRON }, 'background jobs started');
+  logger.info({ queue: USAGE_TOTALS, cron: USAGE_TOTALS_CRON }, 'background jobs started');
   logger.info({ queue: RESERVATION_CLOCK, cron: RESERVATION_CLOCK_CRON }, 'background jobs started');
   logger.info({ queue: CRIB_OVERDUE, cron: CRIB_OVERDUE_CRON }, 'background jobs started');
   logger.info({ queue: SIGN_OFF_REMINDERS, cron: SIGN_OFF_REMINDERS_CRON, timeZone }, 'background jobs started');

@@ -90,6 +90,7 @@ export function reportsService({ db }: Deps) {
   return {
     /** Every figure of the usage review for the range; the statements run side by side, the rows and heatmap in one. */
     async usage(query: Pick<UsageReportQuery, 'from' | 'to' | 'groupBy'>): Promise<UsageReport> {
+      await repo.refreshTotals();
       const range: ReportRange = { from: query.from, to: query.to, timeZone: await repo.timeZone() };
       const [[grouped], [reservations], denials, trainingsInDemand, signOffs] = await Promise.all([
         repo.rows<{ rows: UsageMachineRow[] | UsageMemberRow[] | UsageDayRow[]; heatmap: UsageHeatmapCell[] }>(query.groupBy, range),

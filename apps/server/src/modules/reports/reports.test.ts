@@ -273,6 +273,30 @@ describe('GET /api/reports/usage across a daylight-saving change', () => {
   });
 });
 
+describe('GET /api/reports/usage with a session still running', () => {
+  it('counts a running session up to now, and once it ends, from the kept totals', async () => {
+    const machine = await createMachine(ctx.db, { name: 'Report drill press', category: 'drill_press' });
+    const member = await createMember(ctx.db, { first_name: 'Zora', last_name: 'Report' });
+    // Started 30 minutes ago; yesterday and today (the shop clock is UTC here) hold all of it.
+    const startedAt = new Date(Date.now() - 30 * 60_000);
+    const today = new Date().toISOString().slice(0, 10);
+    const yesterday = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
+    const [row] = await ctx.db('machine_sessions').insert({ machine_id: machine.id, member_id: member.id, started_at: startedAt }).returning('id');
+    const figures = async () => {
+      const report = usageReportSchema.parse((await admin.get(`/api/reports/usage?from=${yesterday}&to=${today}&groupBy=machine`)).body);
+      return report.rows.find((r) => 'machineId' in r && r.machineId === machine.id);
+    };
+    // 30 minutes and the second or so the request takes: 0.5 h to the hundredth.
+    expect(await figures()).toMatchObject({ sessions: 1, hours: 0.5 });
+    const members = usageReportSchema.parse((await admin.get(`/api/reports/usage?from=${yesterday}&to=${today}&groupBy=member`)).body);
+    expect(members.rows.find((r) => 'memberId' in r && r.memberId === member.id)).toMatchObject({ sessions: 1, hours: 0.5 });
+
+    // Ended at 45 minutes: the trigger's totals now carry it, and the figure follows the end.
+    await ctx.db('machine_sessions').where({ id: row.id }).update({ ended_at: new Date(startedAt.getTime() + 45 * 60_000), ended_by: 'member', hours: 0.75 });
+    expect(await figures()).toMatchObject({ sessions: 1, hours: 0.75 });
+  });
+});
+
 describe('who may read the usage report, and which ranges', () => {
   it('signed out answers 401; a member or an instructor 403', async () => {
     expect((await (await browser(ctx)).get('/api/reports/usage?from=2026-03-02&to=2026-03-03')).status).toBe(401);
